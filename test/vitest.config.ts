@@ -1,0 +1,14 @@
+import {defineConfig} from 'vitest/config';
+
+// Reporters are set explicitly: vitest 4.1 otherwise picks a terse reporter
+// in some environments, and CI needs the JSON report for its summary line.
+export default defineConfig({
+  test: {
+    root: new URL('..', import.meta.url).pathname,
+    include: ['test/**/*.test.ts'],
+    exclude: ['test/bench/**', 'test/fuzz/**', 'node_modules/**'],
+    reporters: ['default'],
+    testTimeout: 30_000,
+    env: {TZ: 'UTC', NO_COLOR: '1'},
+  },
+});
