@@ -1,0 +1,171 @@
+/**
+ * Box plot with every observation shown: the chart stet draws for comparing
+ * groups (and, with `paired`, the two conditions of a paired design).
+ */
+import type {TopLevelSpec} from 'vega-lite';
+import type {Sample} from '../methods/types.js';
+import {ink, palette, sizes} from './theme.js';
+
+export interface BoxPlotInput {
+  /** One box per sample, in this order; labels must be distinct. */
+  readonly samples: readonly Sample[];
+  /** Name of the outcome, e.g. `Strength`. */
+  readonly yTitle: string;
+  /** Units of the outcome, e.g. `MPa`; shown as `Strength (MPa)`. */
+  readonly units?: string;
+  /**
+   * Two row-aligned samples measured on the same subjects: a thin line joins
+   * each subject's two values. Default false.
+   */
+  readonly paired?: boolean;
+}
+
+interface Row {
+  /** Horizontal position: group index plus jitter, in group units. */
+  readonly x: number;
+  /** Group index: where the box, the mean and the label sit. */
+  readonly box: number;
+  readonly value: number;
+  readonly subject: number;
+}
+
+const {plotWidth, plotHeight} = sizes;
+
+/** Box width in px for `k` groups: 40% of a group's slot, between 14 and 44 px. */
+function boxWidth(k: number): number {
+  return Math.round(Math.min(44, Math.max(14, (0.4 * plotWidth) / k)));
+}
+
+/** 1/φ: the golden-ratio step gives the most evenly spread additive sequence. */
+const inverseGolden = 0.6180339887498949;
+
+/**
+ * Horizontal jitter of row `i` in [-1, 1): the additive recurrence
+ * frac(1/2 + i/φ), a low-discrepancy sequence (Kuipers & Niederreiter 1974,
+ * "Uniform Distribution of Sequences", ch. 1), so neighbouring rows spread
+ * out evenly and every render places each point in the same spot. Rounded
+ * to 4 digits to keep the spec short.
+ */
+export function jitter(i: number): number {
+  const u = (0.5 + i * inverseGolden) % 1;
+  return Math.round((2 * u - 1) * 1e4) / 1e4;
+}
+
+/** One row per drawn observation; `spread` is the jitter half-width in group units. */
+function rows(input: BoxPlotInput, spread: number): Row[] {
+  const row = (box: number, i: number, value: number): Row => ({
+    x: Math.round((box + spread * jitter(i)) * 1e4) / 1e4,
+    box,
+    value,
+    subject: i,
+  });
+  const out: Row[] = [];
+  if (input.paired) {
+    const [first, second] = input.samples;
+    if (input.samples.length !== 2 || !first || !second) throw new Error('boxPlotSpec: paired needs exactly two samples');
+    if (first.values.length !== second.values.length) {
+      throw new Error(`boxPlotSpec: paired samples must be row-aligned, got ${first.values.length} and ${second.values.length} values`);
+    }
+    // A subject with a missing value has no pair to draw: leave it out of both boxes.
+    for (let i = 0; i < first.values.length; i++) {
+      const a = first.values[i] ?? Number.NaN;
+      const b = second.values[i] ?? Number.NaN;
+      if (Number.isFinite(a) && Number.isFinite(b)) out.push(row(0, i, a), row(1, i, b));
+    }
+    return out;
+  }
+  input.samples.forEach((sample, box) => {
+    sample.values.forEach((value, i) => {
+      if (Number.isFinite(value)) out.push(row(box, i, value));
+    });
+  });
+  return out;
+}
+
+/**
+ * Box plot per group with the raw points overlaid and each group's mean marked.
+ *
+ * Convention (Tukey 1977, "Exploratory Data Analysis", ch. 2): the box spans
+ * the first to the third quartile with a line at the median; whiskers reach
+ * the most extreme observation within 1.5 × IQR of the box. Quartiles are
+ * vega's (d3 `quantileSorted`): Hyndman & Fan (1996) type 7, the default of
+ * R and numpy. Points beyond the whiskers are not drawn twice: every
+ * observation is already a point, jittered horizontally by `jitter(row)`.
+ * The mean is an open diamond. Non-finite values are left out.
+ *
+ * Groups sit at x = 0, 1, …, k − 1 on a linear scale rather than a band
+ * scale: vega-lite splits a line at every band (`pathGroupingFields`), which
+ * would break the lines joining paired points. Group names are therefore
+ * drawn by a text layer, where vega escapes them like any other datum, and
+ * cut with an ellipsis when wider than their slot (say them in the caption).
+ */
+export function boxPlotSpec(input: BoxPlotInput): TopLevelSpec {
+  const k = input.samples.length;
+  if (k === 0) throw new Error('boxPlotSpec: needs at least one sample');
+  const labels = input.samples.map((s) => s.label);
+  if (new Set(labels).size !== k) throw new Error(`boxPlotSpec: sample labels must be distinct, got ${labels.join(', ')}`);
+  const yTitle = input.units ? `${input.yTitle} (${input.units})` : input.yTitle;
+  const slot = plotWidth / k;
+  const box = boxWidth(k);
+
+  const x = {
+    field: 'x',
+    type: 'quantitative' as const,
+    scale: {domain: [-0.5, k - 0.5], nice: false, zero: false},
+    axis: {title: null, labels: false, ticks: false, grid: false, values: []},
+  };
+  const boxX = {...x, field: 'box'};
+  const y = {field: 'value', type: 'quantitative' as const, title: yTitle, scale: {zero: false, nice: true, padding: 10}};
+  const color = {field: 'box', type: 'ordinal' as const, scale: {domain: labels.map((_, i) => i), range: [...palette]}, legend: null};
+
+  const pairLines = {
+    name: 'pairs',
+    mark: {type: 'line' as const, color: ink.pair, strokeWidth: 0.75},
+    encoding: {x, y, detail: {field: 'subject', type: 'nominal' as const}},
+  };
+
+  return {
+    $schema: 'https://vega.github.io/schema/vega-lite/v6.json',
+    width: plotWidth,
+    height: plotHeight,
+    data: {values: rows(input, (0.4 * box) / slot)},
+    layer: [
+      ...(input.paired ? [pairLines] : []),
+      {
+        mark: {
+          type: 'boxplot',
+          orient: 'vertical',
+          extent: 1.5,
+          outliers: false,
+          size: box,
+          box: {fillOpacity: 0.12, stroke: ink.rule, strokeWidth: 1},
+          median: {color: ink.text, strokeWidth: 1.5},
+          rule: {color: ink.rule},
+          ticks: {color: ink.rule, size: box / 2},
+        },
+        encoding: {x: boxX, y, color},
+      },
+      {
+        name: 'points',
+        mark: {type: 'circle', size: sizes.point, opacity: 0.85, stroke: 'white', strokeWidth: 0.5},
+        encoding: {x, y, color},
+      },
+      {
+        name: 'means',
+        mark: {type: 'point', size: sizes.meanSymbol, filled: true, fill: 'white', stroke: ink.text, strokeWidth: 1.5},
+        encoding: {
+          x: boxX,
+          y: {...y, aggregate: 'mean'},
+          // A one-entry legend says what the diamond is.
+          shape: {datum: 'mean', type: 'nominal' as const, scale: {range: ['diamond']}, legend: {title: null, orient: 'top' as const, direction: 'horizontal' as const}},
+        },
+      },
+      {
+        name: 'group-labels',
+        data: {values: labels.map((label, i) => ({label, box: i}))},
+        mark: {type: 'text', baseline: 'top', fontSize: sizes.label, color: ink.label, limit: slot - 8, y: plotHeight + 6},
+        encoding: {x: boxX, text: {field: 'label', type: 'nominal' as const}},
+      },
+    ],
+  };
+}
