@@ -6,6 +6,7 @@ export default defineConfig({
   test: {
     root: new URL('..', import.meta.url).pathname,
     include: ['test/**/*.test.ts'],
+    globalSetup: ['test/global-setup.ts'],
     exclude: ['test/bench/**', 'test/fuzz/**', 'node_modules/**'],
     reporters: ['default'],
     testTimeout: 30_000,

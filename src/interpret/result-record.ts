@@ -1,0 +1,51 @@
+import type {BlockResult} from '../compute/block-result.js';
+import type {ComputedBlock} from '../compute/compute-block.js';
+import {blockNumbers} from './block-numbers.js';
+import {writeSentence, type Adjustment} from './sentence.js';
+
+/**
+ * The block's result record (contract §6): the computed numbers, the
+ * decision on the (adjusted) p at the block's alpha, and the sentence.
+ */
+export interface InterpretedBlock {
+  readonly result: BlockResult;
+  /** The compact statistic string `{{id}}` renders. */
+  readonly compact: string;
+  readonly computed: ComputedBlock;
+}
+
+export function interpretBlock(block: ComputedBlock, adjustment: Adjustment | undefined): InterpretedBlock {
+  const {spec, outcome} = block;
+  const sentence = writeSentence(block, adjustment);
+  const compact = blockNumbers(block, adjustment?.pAdjusted ?? outcome?.p).compact;
+  const n = block.rows.used;
+  const base = {
+    method: spec.method,
+    title: block.title,
+    data: spec.data,
+    n,
+    groups: block.groups,
+    assumptions: outcome?.assumptions ?? [],
+    sentence,
+    warnings: outcome?.warnings ?? [],
+    rows: block.rows,
+  };
+  if (!outcome) return {result: base, compact, computed: block};
+  const decisive = adjustment?.pAdjusted ?? outcome.p;
+  const result: BlockResult = {
+    ...base,
+    statistic: outcome.statistic,
+    df: outcome.df,
+    p: outcome.p,
+    p_adjusted: adjustment?.pAdjusted ?? null,
+    alpha: spec.alpha,
+    alternative: spec.alternative,
+    decision: decisive <= spec.alpha ? 'reject' : 'fail-to-reject',
+    estimate: outcome.estimate,
+    effect: outcome.effect,
+    ...(outcome.sensitivity ? {sensitivity: outcome.sensitivity} : {}),
+    smallest_effect: spec.smallestEffect ?? null,
+    family: adjustment ? {name: adjustment.family, adjust: adjustment.method, size: adjustment.size} : null,
+  };
+  return {result, compact, computed: block};
+}

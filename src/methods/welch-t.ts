@@ -1,0 +1,67 @@
+import {hedgesG} from './shared/hedges-g.js';
+import {pooledSd} from './shared/pooled-sd.js';
+import {summarize} from './shared/summarize.js';
+import {tInference} from './shared/t-inference.js';
+import {tSensitivity} from './shared/t-sensitivity.js';
+import type {MethodDefinition, TwoGroupDesign} from './types.js';
+
+/**
+ * Welch's unequal-variances t test (Welch 1947, Biometrika 34(1-2)):
+ * t = (m2 - m1) / sqrt(s1²/n1 + s2²/n2) with the Welch–Satterthwaite df
+ * (Satterthwaite 1946, Biometrics Bulletin 2(6)).
+ *
+ * Hedges' g keeps the pooled-SD standardizer, and its interval inverts the
+ * pooled t on n1 + n2 - 2 df, so the effect size means the same thing in
+ * every two-group block; sensitivity uses the Welch standard error and df.
+ */
+export const welchT: MethodDefinition<TwoGroupDesign> = {
+  id: 'welch-t',
+  title: 'Welch’s t test',
+  design: 'two-group',
+  compute({first, second}, options) {
+    const a = summarize(first.values);
+    const b = summarize(second.values);
+    const va = a.sd ** 2 / a.n;
+    const vb = b.sd ** 2 / b.n;
+    const se = Math.sqrt(va + vb);
+    const df = (va + vb) ** 2 / (va ** 2 / (a.n - 1) + vb ** 2 / (b.n - 1));
+    const difference = b.mean - a.mean;
+    const inference = tInference({
+      estimate: difference,
+      se,
+      df,
+      nullValue: 0,
+      alternative: options.alternative,
+      confidence: options.confidence,
+    });
+    const sp = pooledSd(a, b);
+    const scale = Math.sqrt(1 / a.n + 1 / b.n);
+    return {
+      statistic: {name: 't', value: inference.t},
+      df,
+      p: inference.p,
+      estimate: {
+        name: `difference in means (${second.label} - ${first.label})`,
+        value: difference,
+        ci: inference.ci,
+        level: options.confidence,
+      },
+      effect: hedgesG({
+        d: difference / sp,
+        t: difference / (sp * scale),
+        df: a.n + b.n - 2,
+        scale,
+        alternative: options.alternative,
+        confidence: options.confidence,
+        standardizer: 'pooled standard deviation',
+      }),
+      sensitivity: tSensitivity({
+        ncpPerUnit: 1 / se,
+        df,
+        alpha: options.alpha,
+        alternative: options.alternative,
+        smallestEffect: options.smallestEffect,
+      }),
+    };
+  },
+};

@@ -1,0 +1,166 @@
+import type {Code, Root, Yaml} from 'mdast';
+import path from 'node:path';
+import {SKIP, visit} from 'unist-util-visit';
+import type {VFile} from 'vfile';
+import {blockChart, type BlockChart} from './charts/block-chart.js';
+import {adjustFamilies} from './compute/adjust-families.js';
+import {computeBlock, type ComputedBlock} from './compute/compute-block.js';
+import type {Dataset} from './data/column.js';
+import {reportError} from './document/report-error.js';
+import {interpretBlock, type InterpretedBlock} from './interpret/result-record.js';
+import {blockNodes} from './render/block-nodes.js';
+import {resolveReferences} from './render/resolve-references.js';
+import {createDatasetLoader} from './resolve/load-datasets.js';
+import {selectRows} from './resolve/select-rows.js';
+import type {BlockSpec} from './spec/block-spec.js';
+import {parseBlock} from './spec/parse-block.js';
+import {defaultSettings, parseSettings, type DocumentSettings} from './spec/parse-settings.js';
+import {UserError} from './user-error.js';
+
+/** Options of the `remarkStet` plugin. */
+export interface RemarkStetOptions {
+  /** Read data files outside the report's folder (default: false). */
+  allowOutside?: boolean | undefined;
+  /** Render charts (default: true). */
+  charts?: boolean | undefined;
+}
+
+/** What the plugin leaves on `file.data.stet` for writers. */
+export interface StetData {
+  readonly settings: DocumentSettings;
+  readonly blocks: ReadonlyMap<string, InterpretedBlock>;
+  readonly datasets: ReadonlyMap<string, Dataset>;
+  /** Chart SVG by block id; the document refers to `charts/ID.svg`. */
+  readonly charts: ReadonlyMap<string, BlockChart>;
+}
+
+declare module 'vfile' {
+  interface DataMap {
+    stet: StetData;
+  }
+}
+
+/**
+ * remark plugin: runs the ```stet blocks of a document and replaces them
+ * with their results.
+ *
+ *   front matter → block specs → datasets → rows → compute → adjust
+ *   families → interpret → charts → replace blocks → resolve {{references}}
+ *
+ * Authors' mistakes become fatal messages on the file, with positions; the
+ * tree is left as far as it got.
+ */
+export default function remarkStet(options: RemarkStetOptions = {}) {
+  return async function transform(tree: Root, file: VFile): Promise<void> {
+    const report = (error: unknown) => reportError(file, error);
+    const baseDir = file.dirname ? path.resolve(file.cwd, file.dirname) : file.cwd;
+
+    // 1. Front matter.
+    const settings = readSettings(tree, report);
+
+    // 2. Blocks: parse and validate each; ids unique.
+    const codes: Code[] = [];
+    const specs = new Map<Code, BlockSpec>();
+    const failed = new Set<string>();
+    visit(tree, 'code', (node: Code) => {
+      if (node.lang !== 'stet') return;
+      codes.push(node);
+      const spec = attempt(report, () => parseBlock(node.value, bodyOrigin(node), placeOf(node), settings));
+      if (!spec) {
+        // Its references would only repeat the block's own error.
+        const id = /^id:\s*["']?([a-z][a-z0-9_-]*)/m.exec(node.value)?.[1];
+        if (id) failed.add(id);
+        return;
+      }
+      const duplicate = [...specs.values()].find((other) => other.id === spec.id);
+      if (duplicate) {
+        report(new UserError(`duplicate block id \`${spec.id}\``, {
+          ruleId: 'duplicate-id',
+          place: spec.keyPlaces['id'] ?? spec.place,
+          hint: `The first block with this id is at line ${duplicate.place.line}; ids must be unique.`,
+        }));
+        return;
+      }
+      specs.set(node, spec);
+    });
+
+    // 3–5. Load each dataset once, select rows, compute.
+    const loader = createDatasetLoader(settings, baseDir, options.allowOutside ?? false);
+    const computed = new Map<Code, ComputedBlock>();
+    for (const [node, spec] of specs) {
+      try {
+        const dataset = await loader.load(spec);
+        computed.set(node, computeBlock(spec, dataset, selectRows(spec, dataset)));
+      } catch (error) {
+        failed.add(spec.id);
+        report(error);
+      }
+    }
+
+    // 6–7. Adjust within families, then decide and word each result.
+    const adjustments = adjustFamilies([...computed.values()], settings.adjust);
+    const blocks = new Map<string, InterpretedBlock>();
+    for (const block of computed.values()) {
+      blocks.set(block.spec.id, interpretBlock(block, adjustments.get(block.spec.id)));
+    }
+
+    // 8. Charts.
+    const charts = new Map<string, BlockChart>();
+    if (options.charts !== false) {
+      for (const block of blocks.values()) {
+        const chart = await attemptAsync(report, () => blockChart(block));
+        if (chart) charts.set(block.computed.spec.id, chart);
+      }
+    }
+
+    // 9. Replace each block by its output (failed blocks stay as written).
+    visit(tree, 'code', (node: Code, index, parent) => {
+      const block = blocks.get(specs.get(node)?.id ?? '');
+      if (!parent || index === undefined || !block || computed.get(node) !== block.computed) return;
+      const nodes = blockNodes(node, block, charts.get(block.computed.spec.id));
+      parent.children.splice(index, 1, ...nodes);
+      return [SKIP, index + nodes.length];
+    });
+    for (const spec of specs.values()) if (!blocks.has(spec.id)) failed.add(spec.id);
+
+    // 10. Inline references.
+    resolveReferences(tree, blocks, failed, report);
+
+    file.data.stet = {settings, blocks, datasets: await loader.loaded(), charts};
+  };
+}
+
+function readSettings(tree: Root, report: (error: unknown) => void): DocumentSettings {
+  const yaml = tree.children.find((node): node is Yaml => node.type === 'yaml');
+  if (!yaml) return defaultSettings;
+  const start = yaml.position?.start ?? {line: 1, column: 1};
+  return attempt(report, () => parseSettings(yaml.value, {line: start.line + 1, column: 1})) ?? defaultSettings;
+}
+
+/** Where the block's YAML body starts: the line after the opening fence. */
+function bodyOrigin(node: Code) {
+  const start = placeOf(node);
+  return {line: start.line + 1, column: start.column};
+}
+
+function placeOf(node: Code) {
+  return {line: node.position?.start.line ?? 1, column: node.position?.start.column ?? 1};
+}
+
+function attempt<T>(report: (error: unknown) => void, run: () => T): T | undefined {
+  try {
+    return run();
+  } catch (error) {
+    report(error);
+    return undefined;
+  }
+}
+
+async function attemptAsync<T>(report: (error: unknown) => void, run: () => Promise<T>): Promise<T | undefined> {
+  try {
+    return await run();
+  } catch (error) {
+    report(error);
+    return undefined;
+  }
+}

@@ -1,0 +1,61 @@
+import type {Root, Text} from 'mdast';
+import {visit} from 'unist-util-visit';
+import type {InterpretedBlock} from '../interpret/result-record.js';
+import {didYouMean} from '../spec/suggest.js';
+import {UserError, type Place} from '../user-error.js';
+import {formatField} from './format-field.js';
+
+/** `{{id}}` or `{{id.path.to.field}}` in prose. */
+export const referencePattern = /\{\{\s*([a-z][a-z0-9_-]*)((?:\.[A-Za-z0-9_]+)*)\s*\}\}/g;
+
+/**
+ * Replace every reference in the document's text with the value it names.
+ * References to blocks that failed are left alone (their error is already
+ * reported); unknown ids and paths are errors at the reference.
+ */
+export function resolveReferences(
+  tree: Root,
+  blocks: ReadonlyMap<string, InterpretedBlock>,
+  failed: ReadonlySet<string>,
+  report: (error: UserError) => void,
+): void {
+  visit(tree, 'text', (node: Text) => {
+    node.value = node.value.replace(referencePattern, (whole, id: string, dotted: string, offset: number) => {
+      const place = placeInText(node, offset);
+      if (failed.has(id)) return whole;
+      const block = blocks.get(id);
+      if (!block) {
+        report(new UserError(`unknown reference \`{{${id}${dotted}}}\`: no block has id \`${id}\``, {
+          ruleId: 'unknown-reference',
+          place,
+          hint: didYouMean(id, blocks.keys(), `Block ids: ${[...blocks.keys()].join(', ') || 'none'}.`),
+        }));
+        return whole;
+      }
+      if (!dotted) return block.compact;
+      const path = dotted.slice(1).split('.');
+      const text = path[0] === 'sentence' && path.length === 1 ? block.result.sentence : formatField(block, path);
+      if (text === undefined) {
+        report(new UserError(`unknown field \`${dotted.slice(1)}\` in reference to \`${id}\``, {
+          ruleId: 'unknown-reference',
+          place,
+          hint: `Fields of \`${id}\`: ${Object.keys(block.result).join(', ')}; groups are ${Object.keys(block.result.groups).join(', ')}.`,
+        }));
+        return whole;
+      }
+      return text;
+    });
+  });
+}
+
+/** Report position of a character of a text node (exact unless escapes precede it). */
+function placeInText(node: Text, offset: number): Place | undefined {
+  const start = node.position?.start;
+  if (!start) return undefined;
+  const before = node.value.slice(0, offset);
+  const lastNewline = before.lastIndexOf('\n');
+  const lines = before.split('\n').length - 1;
+  return lines === 0
+    ? {line: start.line, column: start.column + offset}
+    : {line: start.line + lines, column: offset - lastNewline};
+}
