@@ -1,6 +1,6 @@
 import {bracketRoot, findRoot} from './find-root.js';
 import {normalCdf, normalQuantile, normalSf} from './normal.js';
-import {noncentralTOppositeTail} from './noncentral-t-quadrature.js';
+import {noncentralTQuadrature} from './noncentral-t-quadrature.js';
 import {noncentralTSeries} from './noncentral-t-series.js';
 import {studentTCdf, studentTSf} from './student-t.js';
 
@@ -18,13 +18,17 @@ import {studentTCdf, studentTSf} from './student-t.js';
  * - δ ≥ 0: the Poisson-beta series summed from the Poisson mode outwards
  *   (noncentral-t-series.ts), each tail directly;
  * - δ < 0: the small upper tail by quadrature of a positive integrand
- *   (noncentral-t-quadrature.ts), the cdf as its complement (≥ ½).
+ *   (noncentral-t-quadrature.ts), the cdf as its complement (≥ ½);
+ * - δ > 200: either tail by the same quadrature.
  * Measured against mpmath (50 digits) for ν from 1 to 1e6 (non-integer
  * too), |δ| ≤ 40 and both tails down to 1e-250: at least 13 digits, at
  * least 14 at ordinary arguments; see test/distributions/noncentral-t.test.ts.
  *
  * @example noncentralTSf(31, 10, 30) // 0.5018…, where jstat gives ~1e-40
  */
+
+/** Above this the series needs ~ncp² terms (2e4 at 200); quadrature costs the same at any ncp. */
+const SERIES_MAX_NCP = 200;
 
 /** P(T ≤ t) (upper false) or P(T > t) (upper true). */
 function tail(t: number, df: number, ncp: number, upper: boolean): number {
@@ -39,8 +43,9 @@ function tail(t: number, df: number, ncp: number, upper: boolean): number {
   // relative to P(T ≤ 0) = Φ(-δ).
   if (t < 1e-150) return upper ? normalCdf(ncp) : normalCdf(-ncp);
   // Clamped: a value near 1 carries an absolute error of a few ulps.
-  if (ncp > 0) return Math.min(1, noncentralTSeries(t, df, ncp, upper));
-  const small = Math.min(1, noncentralTOppositeTail(t, df, -ncp));
+  if (ncp > 0 && ncp <= SERIES_MAX_NCP) return Math.min(1, noncentralTSeries(t, df, ncp, upper));
+  if (ncp > 0) return Math.min(1, noncentralTQuadrature(t, df, ncp, upper));
+  const small = Math.min(1, noncentralTQuadrature(t, df, ncp, true));
   return upper ? small : 1 - small;
 }
 
@@ -81,7 +86,7 @@ function ncpForTail(t: number, df: number, target: number, upper: boolean): numb
   if (df === Infinity) return t - z;
   const f = (ncp: number): number => (upper ? target - tail(t, df, ncp, true) : tail(t, df, ncp, false) - target);
   // Normal approximation T ≈ N(δ, 1 + t²/(2ν)) for the first guess.
-  const scale = Math.sqrt(1 + (t * t) / (2 * df));
+  const scale = Math.hypot(1, t / Math.sqrt(2 * df));
   const [lo, hi] = bracketRoot(f, t - z * scale, scale, true);
   return findRoot(f, lo, hi);
 }
