@@ -3,14 +3,13 @@ import {pooledSd} from './shared/pooled-sd.js';
 import {summarize} from './shared/summarize.js';
 import {tInference} from './shared/t-inference.js';
 import {tSensitivity} from './shared/t-sensitivity.js';
-import {spreadWarnings} from './shared/spread-warnings.js';
 import type {MethodDefinition, TwoGroupDesign} from './types.js';
 
 /**
  * Student's two-sample t test with pooled variance (Student 1908; Fisher
  * 1925, "Statistical Methods for Research Workers", §24): t = (m2 - m1) /
  * (sp sqrt(1/n1 + 1/n2)) on n1 + n2 - 2 df. Assumes equal population
- * variances; a spread ratio above 2 earns a warning pointing to `welch-t`.
+ * variances; the block stage reports Levene's check and points to `welch-t`.
  */
 export const studentT: MethodDefinition<TwoGroupDesign> = {
   id: 'student-t',
@@ -56,7 +55,6 @@ export const studentT: MethodDefinition<TwoGroupDesign> = {
         alternative: options.alternative,
         smallestEffect: options.smallestEffect,
       }),
-      warnings: spreadWarnings(first.label, a, second.label, b),
     };
   },
 };

@@ -6,7 +6,7 @@
 export type Alternative = 'two-sided' | 'greater' | 'less';
 
 /** How a method reads its data; the design stage prepares each shape. */
-export type DesignKind = 'none' | 'one-sample' | 'paired' | 'two-group';
+export type DesignKind = Design['kind'];
 
 /** Numeric outcome, one group per level (or a single group `all`). */
 export interface Sample {
@@ -38,7 +38,74 @@ export interface DescribeDesign {
   readonly samples: readonly Sample[];
 }
 
-export type Design = OneSampleDesign | PairedDesign | TwoGroupDesign | DescribeDesign;
+/** Two or more independent groups of a numeric outcome, in level order. */
+export interface KGroupDesign {
+  readonly kind: 'k-group';
+  readonly samples: readonly Sample[];
+}
+
+/**
+ * A two-way table of counts: `counts[i][j]` rows with `y` at `rows[i]` and
+ * `by` at `columns[j]`. Levels are in declared (or sorted) order.
+ */
+export interface ContingencyDesign {
+  readonly kind: 'contingency';
+  readonly rows: readonly string[];
+  readonly columns: readonly string[];
+  readonly counts: readonly (readonly number[])[];
+  /** `success:` as declared (a level of `y`), for proportion tests. */
+  readonly success: string | undefined;
+}
+
+/**
+ * Paired categorical outcomes (McNemar): `table[i][j]` counts subjects at
+ * `levels[i]` on the first measurement and `levels[j]` on the second.
+ */
+export interface PairedCategoricalDesign {
+  readonly kind: 'paired-categorical';
+  readonly first: string;
+  readonly second: string;
+  readonly levels: readonly [string, string];
+  readonly table: readonly [readonly [number, number], readonly [number, number]];
+}
+
+/** Counts of one categorical column and, for goodness of fit, expected proportions. */
+export interface CountsDesign {
+  readonly kind: 'counts';
+  readonly levels: readonly string[];
+  readonly counts: readonly number[];
+  /** Expected proportions per level (sum 1); undefined means equal. */
+  readonly expected: readonly number[] | undefined;
+}
+
+/** Successes out of trials for one proportion. */
+export interface ProportionDesign {
+  readonly kind: 'proportion';
+  readonly successes: number;
+  readonly trials: number;
+  /** The level of `y` counted as a success. */
+  readonly success: string;
+}
+
+/** Numeric pairs (correlation) or predictors and an outcome (regression), row-aligned. */
+export interface BivariateDesign {
+  readonly kind: 'bivariate';
+  /** One predictor for correlation; one or more for regression. */
+  readonly x: readonly Sample[];
+  readonly y: Sample;
+}
+
+export type Design =
+  | OneSampleDesign
+  | PairedDesign
+  | TwoGroupDesign
+  | DescribeDesign
+  | KGroupDesign
+  | ContingencyDesign
+  | PairedCategoricalDesign
+  | CountsDesign
+  | ProportionDesign
+  | BivariateDesign;
 
 export interface MethodOptions {
   readonly alternative: Alternative;
@@ -49,6 +116,12 @@ export interface MethodOptions {
   readonly mu: number;
   /** Smallest effect of interest, in the outcome's units. */
   readonly smallestEffect: number | undefined;
+  /** k-group tests: the post-hoc comparisons to run (`none` = skip). */
+  readonly posthoc: 'tukey' | 'games-howell' | 'dunn' | 'none' | undefined;
+  /** chi-square on a 2x2 table: `yates` applies Yates' continuity correction. */
+  readonly correction: 'yates' | 'none';
+  /** linear regression: fit an intercept (default true). */
+  readonly intercept: boolean;
 }
 
 export interface Statistic {
@@ -70,7 +143,8 @@ export interface EffectSize {
   /** Stable id, e.g. `hedges-g`. */
   readonly name: string;
   readonly value: number;
-  readonly ci: readonly [number, number];
+  /** Null only where no deterministic interval is established (ε² of Kruskal–Wallis). */
+  readonly ci: readonly [number, number] | null;
   /** What the difference was divided by, in words. */
   readonly standardizer?: string;
 }
@@ -89,18 +163,46 @@ export interface AssumptionCheck {
   readonly p: number;
 }
 
+/** One pairwise comparison after a k-group test. */
+export interface PosthocComparison {
+  readonly a: string;
+  readonly b: string;
+  /** Estimate of `b - a` (difference in means, or in mean ranks for Dunn). */
+  readonly estimate: number;
+  /** Simultaneous interval at the block's confidence; null where the method has none (Dunn). */
+  readonly ci: readonly [number, number] | null;
+  readonly statistic: number;
+  readonly p_adjusted: number;
+}
+
 /** What a method computes; the block stage adds alpha, decision and words. */
 export interface MethodOutcome {
   readonly statistic: Statistic;
   /** A number, `[df1, df2]` for F tests, or null. */
   readonly df: number | readonly [number, number] | null;
   readonly p: number;
-  readonly estimate: Estimate;
-  readonly effect: EffectSize;
+  /** Absent only for diagnostics whose question has no estimate (normality). */
+  readonly estimate?: Estimate;
+  readonly effect?: EffectSize;
   readonly sensitivity?: Sensitivity;
   readonly assumptions?: readonly AssumptionCheck[];
   readonly warnings?: readonly string[];
+  /** Which computation was used, in words: `exact`, `normal approximation with continuity correction`. */
+  readonly variant?: string;
+  readonly posthoc?: readonly PosthocComparison[];
+  /**
+   * Method-specific fields written at the top level of the block's JSON
+   * (contract §6): `coefficients`, `r_squared`, `residual_sd`,
+   * `anova_table`, `expected`, `observed`, …
+   */
+  readonly details?: Readonly<Record<string, unknown>>;
 }
+
+/**
+ * The kind of question a method answers; it picks the family of sentence
+ * templates (contract §7) the interpretation uses.
+ */
+export type Question = 'difference' | 'association' | 'independence' | 'proportion' | 'fit' | 'equivalence' | 'diagnostic';
 
 export interface MethodDefinition<D extends Design = Design> {
   /** Method id as written in a block (`welch-t`). */
@@ -108,7 +210,18 @@ export interface MethodDefinition<D extends Design = Design> {
   /** Name used in sentences (`Welch's t test`). */
   readonly title: string;
   readonly design: D['kind'];
+  /** The kind of question the method answers (default `difference`). */
+  readonly question?: Question;
   /** Whether the block must declare `mu`. */
   readonly needsMu?: boolean;
+  /** Whether the block must declare `success` (a level of y). */
+  readonly needsSuccess?: boolean;
+  /** Whether the block must declare `smallest-effect` (equivalence). */
+  readonly needsSmallestEffect?: boolean;
+  /**
+   * Validate and compute. Data that make the method impossible (a constant
+   * sample, an empty table row) throw a `MethodError` with a message an
+   * author can act on; the block stage positions it.
+   */
   compute(design: D, options: MethodOptions): MethodOutcome;
 }

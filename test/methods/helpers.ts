@@ -6,7 +6,17 @@ export function sample(label: string, values: readonly number[]): Sample {
 }
 
 export function options(overrides: Partial<MethodOptions> = {}): MethodOptions {
-  return {alternative: 'two-sided', confidence: 0.95, alpha: 0.05, mu: 0, smallestEffect: undefined, ...overrides};
+  return {
+    alternative: 'two-sided',
+    confidence: 0.95,
+    alpha: 0.05,
+    mu: 0,
+    smallestEffect: undefined,
+    posthoc: undefined,
+    correction: 'none',
+    intercept: true,
+    ...overrides,
+  };
 }
 
 /**

@@ -19,14 +19,14 @@ describe('one-sample t test', () => {
     expect(lre(result.statistic.value, scipy.t)).toBeGreaterThanOrEqual(13);
     expect(result.df).toBe(scipy.df);
     expect(lre(result.p, scipy.p_value)).toBeGreaterThanOrEqual(12);
-    expect(intervalDigits(result.estimate.ci, scipy.conf_int, lre)).toBeGreaterThanOrEqual(intervalFloor);
-    expect(lre(result.estimate.value, scipy.mean)).toBeGreaterThanOrEqual(14);
+    expect(intervalDigits(result.estimate!.ci, scipy.conf_int, lre)).toBeGreaterThanOrEqual(intervalFloor);
+    expect(lre(result.estimate!.value, scipy.mean)).toBeGreaterThanOrEqual(14);
   });
 
   it("agrees with R's printed output at its precision (R stats-Ex.Rout.save, ?t.test)", () => {
     expect(result.statistic.value.toFixed(3)).toBe(reference.published.t.toFixed(3));
     expect(Number(result.p.toPrecision(4))).toBe(reference.published.p_value);
-    expect(Number(result.estimate.ci[0].toPrecision(7))).toBe(reference.published.conf_int[0]);
+    expect(Number(result.estimate!.ci[0].toPrecision(7))).toBe(reference.published.conf_int[0]);
   });
 
   it('gives one-sided p-values that halve the two-sided one on the side of the estimate', () => {
@@ -36,8 +36,8 @@ describe('one-sample t test', () => {
     // Symmetry of the t distribution: common practice, no source.
     expect(lre(greater.p, reference.scipy.p_value / 2)).toBeGreaterThanOrEqual(12);
     expect(lre(less.p, 1 - reference.scipy.p_value / 2)).toBeGreaterThanOrEqual(12);
-    expect(greater.estimate.ci[1]).toBe(Infinity);
-    expect(less.estimate.ci[0]).toBe(-Infinity);
+    expect(greater.estimate!.ci[1]).toBe(Infinity);
+    expect(less.estimate!.ci[0]).toBe(-Infinity);
   });
 
   it('tests against mu', () => {

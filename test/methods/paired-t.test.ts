@@ -26,8 +26,8 @@ describe('paired t test', () => {
     expect(lre(result.statistic.value, reference.scipy.t)).toBeGreaterThanOrEqual(13);
     expect(result.df).toBe(9);
     expect(lre(result.p, reference.scipy.p_value)).toBeGreaterThanOrEqual(pDigits);
-    expect(lre(result.estimate.value, reference.scipy.mean_difference)).toBeGreaterThanOrEqual(14);
-    expect(intervalDigits(result.estimate.ci, reference.scipy.conf_int, lre)).toBeGreaterThanOrEqual(intervalFloor);
+    expect(lre(result.estimate!.value, reference.scipy.mean_difference)).toBeGreaterThanOrEqual(14);
+    expect(intervalDigits(result.estimate!.ci, reference.scipy.conf_int, lre)).toBeGreaterThanOrEqual(intervalFloor);
     // R stats-Ex.Rout.save prints t = -4.0621, p-value = 0.002833.
     expect(result.statistic.value.toFixed(4)).toBe(reference.published.t.toFixed(4));
     expect(Number(result.p.toPrecision(4))).toBe(reference.published.p_value);
@@ -40,7 +40,7 @@ describe('paired t test', () => {
       options(),
     );
     const j = 1 - 3 / (4 * 9 - 1); // Hedges & Olkin 1985 correction on n − 1 = 9 df
-    expect(lre(result.effect.value / j, reference.scipy.paired.cohens_d_z)).toBeGreaterThanOrEqual(13);
+    expect(lre(result.effect!.value / j, reference.scipy.paired.cohens_d_z)).toBeGreaterThanOrEqual(13);
     expect(lre(result.statistic.value, reference.scipy.paired.t)).toBeGreaterThanOrEqual(13);
     expect(lre(result.p, reference.scipy.paired.p_value)).toBeGreaterThanOrEqual(pDigits);
   });

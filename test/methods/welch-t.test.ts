@@ -24,7 +24,7 @@ describe("Welch's t test", () => {
     expect(lre(result.statistic.value, reference.scipy.t)).toBeGreaterThanOrEqual(13);
     expect(lre(result.df as number, reference.scipy.df)).toBeGreaterThanOrEqual(13);
     expect(lre(result.p, reference.scipy.p_value)).toBeGreaterThanOrEqual(pDigits);
-    expect(intervalDigits(result.estimate.ci, reference.scipy.conf_int, lre)).toBeGreaterThanOrEqual(intervalFloor);
+    expect(intervalDigits(result.estimate!.ci, reference.scipy.conf_int, lre)).toBeGreaterThanOrEqual(intervalFloor);
     // R stats-Ex.Rout.save prints t = -3.7671, df = 18.332, p-value = 0.001374.
     expect(result.statistic.value.toFixed(4)).toBe(reference.published.t.toFixed(4));
     expect((result.df as number).toFixed(3)).toBe(reference.published.df.toFixed(3));
@@ -41,7 +41,7 @@ describe("Welch's t test", () => {
       expect(lre(result.statistic.value, expected.t), key).toBeGreaterThanOrEqual(13);
       expect(lre(result.df as number, expected.df), key).toBeGreaterThanOrEqual(13);
       expect(lre(result.p, expected.p_value), key).toBeGreaterThanOrEqual(pDigits);
-      expect(intervalDigits(result.estimate.ci, expected.conf_int, lre), key).toBeGreaterThanOrEqual(intervalFloor);
+      expect(intervalDigits(result.estimate!.ci, expected.conf_int, lre), key).toBeGreaterThanOrEqual(intervalFloor);
     }
   });
 
@@ -50,7 +50,7 @@ describe("Welch's t test", () => {
     const result = welchT.compute({kind: 'two-group', first: sample('A2', reference.data.A2), second: sample('A1', reference.data.A1)}, options());
     expect(lre(result.df as number, reference.scipy.df)).toBeGreaterThanOrEqual(13);
     expect(lre(result.p, reference.scipy.p_value)).toBeGreaterThanOrEqual(pDigits);
-    expect(intervalDigits(result.estimate.ci, reference.scipy.conf_int, lre)).toBeGreaterThanOrEqual(intervalFloor);
+    expect(intervalDigits(result.estimate!.ci, reference.scipy.conf_int, lre)).toBeGreaterThanOrEqual(intervalFloor);
   });
 
   it('reports the sensitivity at the declared smallest effect and the 80% detectable effect', () => {
