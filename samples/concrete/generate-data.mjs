@@ -53,3 +53,23 @@ for (let i = 0; i < 12; i++) {
   slabs.push(`S${String(i + 1).padStart(2, '0')};${fmt(base)};${fmt(base + normal(1.6, 1.4))}`);
 }
 writeFileSync(new URL('data/slabs.csv', import.meta.url), `${slabs.join('\n')}\n`);
+
+// Regimes: 12 cubes under each of three curing regimes, with the mix's
+// water–cement ratio; strength falls with w/c and with poorer curing.
+const regimes = {moist: 0, membrane: -1.2, air: -4.0};
+const cubes = ['cube,regime,water_cement,strength_mpa'];
+let cube = 1;
+for (const [regime, shift] of Object.entries(regimes)) {
+  for (let i = 0; i < 12; i++) {
+    const wc = round(0.4 + 0.15 * uniform(), 2);
+    cubes.push(`K${String(cube++).padStart(2, '0')},${regime},${wc},${round(70 - 70 * wc + shift + normal(0, 2.2), 1)}`);
+  }
+}
+writeFileSync(new URL('data/regimes.csv', import.meta.url), `${cubes.join('\n')}\n`);
+
+// Deliveries: each truck's ticket checked on arrival (pass/fail).
+const deliveries = ['ticket,supplier,check'];
+for (const [supplier, failRate] of [['Northfield', 0.08], ['Quarrybank', 0.3]]) {
+  for (let i = 0; i < 30; i++) deliveries.push(`${supplier.slice(0, 1)}${String(i + 1).padStart(3, '0')},${supplier},${uniform() < failRate ? 'fail' : 'pass'}`);
+}
+writeFileSync(new URL('data/deliveries.csv', import.meta.url), `${deliveries.join('\n')}\n`);

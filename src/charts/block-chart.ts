@@ -16,7 +16,7 @@ export interface BlockChart {
 export async function blockChart(block: InterpretedBlock): Promise<BlockChart | undefined> {
   const {spec, design, units, names} = block.computed;
   if (spec.chart === 'none' || !spec.show.has('chart')) return undefined;
-  if (design.kind !== 'two-group' && design.kind !== 'paired') return undefined;
+  if (design.kind !== 'two-group' && design.kind !== 'paired' && design.kind !== 'k-group') return undefined;
   const paired = design.kind === 'paired';
   // Boxes are named as in the sentences (a paired design's column labels).
   const samples = samplesOf(design).map((s, i) => ({label: names.samples[i] ?? s.label, values: s.values}));

@@ -3,6 +3,7 @@ import type {
   AssumptionCheck,
   EffectSize,
   Estimate,
+  PosthocComparison,
   Sensitivity,
   Statistic,
 } from '../methods/types.js';
@@ -17,7 +18,10 @@ export interface RowAccount {
   readonly excluded_levels: number;
 }
 
-/** One block's result record: contract §6, numbers unrounded. */
+/**
+ * One block's result record: contract §6, numbers unrounded. Method-specific
+ * fields (`coefficients`, `anova_table`, `expected`, …) sit beside these.
+ */
 export interface BlockResult {
   readonly method: string;
   /** The test's name as used in sentences. */
@@ -38,6 +42,11 @@ export interface BlockResult {
   readonly smallest_effect?: number | null;
   readonly family?: {readonly name: string; readonly adjust: string; readonly size: number} | null;
   readonly assumptions: readonly AssumptionCheck[];
+  readonly posthoc?: readonly PosthocComparison[];
+  /** Which computation gave p: `exact`, `normal approximation …`. */
+  readonly variant?: string;
+  /** Why `test: auto` chose this method. */
+  readonly auto?: {readonly reason: string};
   readonly sentence: string;
   readonly warnings: readonly string[];
   readonly rows: RowAccount;

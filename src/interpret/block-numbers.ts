@@ -4,10 +4,12 @@ import {
   formatDf,
   formatFixed,
   formatInterval,
+  formatUnitBounded,
   pClause,
   recordedDecimals,
 } from './format-number.js';
-import {effectSymbols, wording} from './wording.js';
+import type {EffectSize} from '../methods/types.js';
+import {effectSymbols, statisticSymbols, unitBoundedEffects, wording} from './wording.js';
 
 /**
  * The block's numbers formatted once, with decimals chosen from the data:
@@ -35,37 +37,62 @@ export interface BlockNumbers {
 }
 
 export function blockNumbers(block: ComputedBlock, pForDecision: number | undefined): BlockNumbers {
-  const recorded = Math.max(...samplesOf(block.design).map((sample) => recordedDecimals(sample.values)));
+  const samples = samplesOf(block.design);
+  const recorded = samples.length ? Math.max(...samples.map((sample) => recordedDecimals(sample.values))) : 0;
   const summaryDecimals = Math.min(6, recorded + 1);
   const {outcome, spec} = block;
   const level = `${Math.round(spec.confidence * 1000) / 10}%`;
+  const estimate = outcome?.estimate;
+  const estimateDecimals = estimate ? decimalsForWidth(intervalWidth(estimate.value, estimate.ci)) : summaryDecimals;
   const withUnits = (value: number, decimals = estimateDecimals) => unitText(formatFixed(value, decimals), block.units);
-  const estimateDecimals = outcome ? decimalsForWidth(intervalWidth(outcome.estimate.value, outcome.estimate.ci)) : summaryDecimals;
   if (!outcome) {
-    const all = Object.values(block.groups);
-    const compact = all
+    const compact = Object.values(block.groups)
       .map((g) => `M = ${formatFixed(g.mean, summaryDecimals)}, SD = ${formatFixed(g.sd, summaryDecimals)}, n = ${g.n}`)
       .join('; ');
     return {recordedDecimals: recorded, summaryDecimals, estimateDecimals, withUnits, estimateCi: '', statistic: '', testStatistics: '', effect: '', compact};
   }
   const df = outcome.df;
   const dfText = df === null ? '' : typeof df === 'number' ? `(${formatDf(df)})` : `(${df.map(formatDf).join(', ')})`;
-  const statistic = `${outcome.statistic.name}${dfText} = ${formatFixed(outcome.statistic.value, 2)}`;
+  const statisticSymbol = statisticSymbols[outcome.statistic.name] ?? outcome.statistic.name;
+  const statistic = `${statisticSymbol}${dfText} = ${formatFixed(outcome.statistic.value, 2)}`;
   const testStatistics = `${statistic}, ${pClause(outcome.p, pForDecision === outcome.p ? spec.alpha : undefined)}`;
-  const symbol = effectSymbols[outcome.effect.name] ?? outcome.effect.name;
-  const effectCi = wording.confidenceInterval(level, formatInterval(outcome.effect.ci, 2));
-  const effect = `${symbol} = ${formatFixed(outcome.effect.value, 2)}, ${effectCi}`;
+  const effect = outcome.effect ? effectText(outcome.effect, level) : '';
   return {
     recordedDecimals: recorded,
     summaryDecimals,
     estimateDecimals,
     withUnits,
-    estimateCi: wording.confidenceInterval(level, formatInterval(outcome.estimate.ci, estimateDecimals)),
+    estimateCi: estimate ? wording.confidenceInterval(level, boundedScale(block) ? boundedInterval(estimate.ci, Math.max(2, estimateDecimals)) : formatInterval(estimate.ci, estimateDecimals)) : '',
     statistic,
     testStatistics,
     effect,
-    compact: `${testStatistics}, ${effect}`,
+    compact: effect ? `${testStatistics}, ${effect}` : testStatistics,
   };
+}
+
+/**
+ * Estimates on a scale bounded by 1 (correlations, proportions and their
+ * differences) print without a leading zero, as the reporting style asks.
+ */
+export function boundedScale(block: ComputedBlock): boolean {
+  const estimate = block.outcome?.estimate;
+  return estimate !== undefined && estimate.units === undefined && Math.abs(estimate.value) <= 1 && block.question !== 'difference'
+    && block.question !== 'equivalence';
+}
+
+function boundedInterval(ci: readonly [number, number], decimals: number): string {
+  return `[${formatUnitBounded(ci[0], decimals)}, ${formatUnitBounded(ci[1], decimals)}]`;
+}
+
+/** `g = 1.25, 95% CI [0.31, 2.17]`; bounded effects (r, V, η²) without a leading zero. */
+function effectText(effect: EffectSize, level: string): string {
+  const symbol = effectSymbols[effect.name] ?? effect.name;
+  const bounded = unitBoundedEffects.has(effect.name);
+  const format = (v: number) => (bounded ? formatUnitBounded(v, 2) : formatFixed(v, 2));
+  const ci = effect.ci && (Number.isFinite(effect.ci[0]) || Number.isFinite(effect.ci[1]))
+    ? `, ${wording.confidenceInterval(level, `[${format(effect.ci[0])}, ${format(effect.ci[1])}]`)}`
+    : '';
+  return `${symbol} = ${format(effect.value)}${ci}`;
 }
 
 export function unitText(number: string, units: string | undefined): string {

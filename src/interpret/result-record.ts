@@ -22,6 +22,7 @@ export function interpretBlock(block: ComputedBlock, adjustment: Adjustment | un
   const base = {
     method: spec.method,
     title: block.title,
+    ...(block.autoReason ? {auto: {reason: block.autoReason}} : {}),
     data: spec.data,
     n,
     groups: block.groups,
@@ -33,6 +34,8 @@ export function interpretBlock(block: ComputedBlock, adjustment: Adjustment | un
   if (!outcome) return {result: base, compact, computed: block};
   const decisive = adjustment?.pAdjusted ?? outcome.p;
   const result: BlockResult = {
+    // Method-specific fields first, so they can never overwrite the contract's.
+    ...outcome.details,
     ...base,
     statistic: outcome.statistic,
     df: outcome.df,
@@ -41,9 +44,11 @@ export function interpretBlock(block: ComputedBlock, adjustment: Adjustment | un
     alpha: spec.alpha,
     alternative: spec.alternative,
     decision: decisive <= spec.alpha ? 'reject' : 'fail-to-reject',
-    estimate: outcome.estimate,
-    effect: outcome.effect,
+    ...(outcome.estimate ? {estimate: outcome.estimate} : {}),
+    ...(outcome.effect ? {effect: outcome.effect} : {}),
     ...(outcome.sensitivity ? {sensitivity: outcome.sensitivity} : {}),
+    ...(outcome.posthoc ? {posthoc: outcome.posthoc} : {}),
+    ...(outcome.variant ? {variant: outcome.variant} : {}),
     smallest_effect: spec.smallestEffect ?? null,
     family: adjustment ? {name: adjustment.family, adjust: adjustment.method, size: adjustment.size} : null,
   };

@@ -14,6 +14,86 @@ export const wording = {
   pairedContrast: (second: string, first: string) => `${second} and ${first} within pairs`,
   oneSampleContrast: (outcome: string, mu: string) => `mean ${outcome} from the reference value ${mu}`,
 
+  // What each kind of question is about: the contrast tested, the null
+  // hypothesis, and the equality a non-significant result must not claim.
+  phrases: {
+    meanDifference: (outcome: string, second: string, first: string) => ({
+      contrast: `difference in mean ${outcome} between ${second} and ${first}`,
+      nullHypothesis: 'equal population means',
+      claim: 'the population means are equal',
+    }),
+    locationShift: (outcome: string, second: string, first: string) => ({
+      contrast: `difference in ${outcome} between ${second} and ${first}`,
+      nullHypothesis: 'identically distributed groups',
+      claim: `${outcome} is distributed alike in ${second} and ${first}`,
+    }),
+    pairedDifference: (second: string, first: string) => ({
+      contrast: `difference between ${second} and ${first} within pairs`,
+      nullHypothesis: 'a zero mean difference',
+      claim: 'the mean difference is zero',
+    }),
+    pairedShift: (second: string, first: string) => ({
+      contrast: `difference between ${second} and ${first} within pairs`,
+      nullHypothesis: 'differences centred on zero',
+      claim: 'the differences are centred on zero',
+    }),
+    oneSample: (outcome: string, mu: string) => ({
+      contrast: `difference between mean ${outcome} and ${mu}`,
+      nullHypothesis: `a population mean of ${mu}`,
+      claim: `the population mean is ${mu}`,
+    }),
+    kGroups: (outcome: string, k: number, by: string, ranks: boolean) => ({
+      contrast: `difference in ${ranks ? '' : 'mean '}${outcome} among the ${k} groups of ${by}`,
+      nullHypothesis: ranks ? 'identically distributed groups' : 'equal means in all groups',
+      claim: ranks ? 'the groups are distributed alike' : 'all group means are equal',
+    }),
+    correlation: (x: string, y: string, monotonic: boolean) => ({
+      contrast: `${monotonic ? 'monotonic ' : ''}association between ${x} and ${y}`,
+      nullHypothesis: monotonic ? 'no monotonic association' : 'zero correlation',
+      claim: `${x} and ${y} are unrelated`,
+    }),
+    regression: (y: string, predictors: string) => ({
+      contrast: `relation of ${y} to ${predictors}`,
+      nullHypothesis: 'zero slopes',
+      claim: `${y} is unrelated to ${predictors}`,
+    }),
+    independence: (y: string, by: string) => ({
+      contrast: `association between ${y} and ${by}`,
+      nullHypothesis: `independence of ${y} and ${by}`,
+      claim: `${y} and ${by} are independent`,
+    }),
+    proportion: (success: string, mu: string) => ({
+      contrast: `difference between the proportion of “${success}” and ${mu}`,
+      nullHypothesis: `a proportion of ${mu}`,
+      claim: `the proportion is ${mu}`,
+    }),
+    twoProportions: (success: string, second: string, first: string) => ({
+      contrast: `difference in the proportion of “${success}” between ${second} and ${first}`,
+      nullHypothesis: 'equal proportions',
+      claim: 'the proportions are equal',
+    }),
+    pairedProportions: (first: string, second: string) => ({
+      contrast: `change between ${first} and ${second}`,
+      nullHypothesis: 'equal proportions at both measurements',
+      claim: 'the proportions are the same at both measurements',
+    }),
+    fit: (y: string) => ({
+      contrast: `departure of ${y} from the expected proportions`,
+      nullHypothesis: 'the expected proportions',
+      claim: 'the proportions are as expected',
+    }),
+    normality: (outcome: string) => ({
+      contrast: `departure from normality in ${outcome}`,
+      nullHypothesis: 'normally distributed data',
+      claim: `${outcome} is normally distributed (with few observations this check has little power)`,
+    }),
+    spread: (outcome: string, by: string) => ({
+      contrast: `difference in the spread of ${outcome} among the groups of ${by}`,
+      nullHypothesis: 'equal spreads',
+      claim: 'the spreads are equal',
+    }),
+  },
+
   // The estimate, in the data's units, with its direction in plain words.
   twoGroupEstimate: (outcome: string, amount: string, direction: Direction, second: string, first: string) =>
     direction === 'none'
@@ -28,11 +108,6 @@ export const wording = {
       ? `mean ${outcome} was ${mean}, equal to the reference value ${mu} to the reported precision`
       : `mean ${outcome} was ${mean}, ${amount} ${direction === 'higher' ? 'above' : 'below'} the reference value ${mu}`,
 
-  nullHypothesis: {
-    'two-group': 'equal population means',
-    paired: 'a zero mean difference',
-    'one-sample': 'a population mean equal to the reference value',
-  } as Record<string, string>,
 
   // One-sided tests name their alternative hypothesis in words.
   twoGroupAlternative: (outcome: string, higher: boolean, second: string, first: string) =>
@@ -42,18 +117,36 @@ export const wording = {
   oneSampleAlternative: (outcome: string, higher: boolean, mu: string) =>
     `One-sided test: the alternative hypothesis is that mean ${outcome} is ${higher ? 'above' : 'below'} ${mu}.`,
 
-  significant: (test: string, estimate: string, ci: string, stats: string, alpha: string, nullHypothesis: string) =>
-    `${testSubject(test)} found a statistically significant difference at the pre-declared α = ${alpha}: ` +
-    `${estimate} (${ci}; ${stats}), so the null hypothesis of ${nullHypothesis} is rejected.`,
-  notSignificant: (test: string, contrast: string, alpha: string, stats: string, estimate: string, ci: string) =>
-    `${testSubject(test)} detected no statistically significant difference in the ${contrast} at the pre-declared ` +
-    `α = ${alpha} (${stats}); the null hypothesis is not rejected. In these data, ${estimate} (${ci}).`,
+  significant: (test: string, contrast: string, alpha: string, stats: string, nullHypothesis: string) =>
+    `${testSubject(test)} found a statistically significant ${contrast} at the pre-declared α = ${alpha} ` +
+    `(${stats}), so the null hypothesis of ${nullHypothesis} is rejected.`,
+  notSignificant: (test: string, contrast: string, alpha: string, stats: string) =>
+    `${testSubject(test)} detected no statistically significant ${contrast} at the pre-declared ` +
+    `α = ${alpha} (${stats}); the null hypothesis is not rejected.`,
+  estimateSignificant: (estimate: string, ci: string) => `${capitalize(estimate)} (${ci}).`,
+  estimateNotSignificant: (estimate: string, ci: string) => `In these data, ${estimate} (${ci}).`,
+  genericEstimate: (name: string, value: string) => `the ${name} was ${value}`,
+  compatibleValues: (claim: string, ci: string) =>
+    `This does not show that ${claim}: the ${ci} shows the values still compatible with the data.`,
+  equivalent: (test: string, contrast: string, margin: string, alpha: string, ci: string, stats: string) =>
+    `${testSubject(test)} showed that the ${contrast} is equivalent within ±${margin} at the pre-declared α = ${alpha}: ` +
+    `the ${ci} lies inside ±${margin} (${stats}).`,
+  notEquivalent: (test: string, contrast: string, margin: string, alpha: string, ci: string, stats: string) =>
+    `${testSubject(test)} could not establish that the ${contrast} is equivalent within ±${margin} at the pre-declared ` +
+    `α = ${alpha}: the ${ci} extends beyond ±${margin} (${stats}). This does not show that a difference of ${margin} or more exists.`,
+  posthocDiffering: (procedure: string, alpha: string, pairs: readonly string[]) =>
+    `Pairs that differ at α = ${alpha} (${procedure}-adjusted): ${pairs.join('; ')}.`,
+  posthocNone: (procedure: string) => `No pair of groups differed significantly after ${procedure} adjustment.`,
+  posthocPair: (contrast: string, amount: string, ci: string | undefined, p: string) =>
+    `${contrast} = ${amount}${ci ? ` (${ci}, ${p})` : ` (${p})`}`,
+  assumptionNormality: (group: string, statistic: string, p: string, alternative: string | undefined) =>
+    `The Shapiro–Wilk check suggests non-normal data${group ? ` in ${group}` : ''} (W = ${statistic}, ${p})` +
+    (alternative ? `; with small samples, consider declaring \`test: ${alternative}\`.` : '.'),
+  assumptionSpread: (statistic: string, p: string, test: string, alternative: string) =>
+    `Levene’s check suggests unequal spreads (F = ${statistic}, ${p}); ${test} assumes equal spreads, so consider declaring \`test: ${alternative}\`.`,
+  autoChoice: (reason: string) => `The test was chosen from the declared design: ${reason}.`,
+  variant: (variant: string) => `The p-value is from the ${variant}.`,
   effect: (effect: string) => `The standardized effect was ${effect}.`,
-  equalityClaim: {
-    'two-group': 'the population means are equal',
-    paired: 'the mean difference is zero',
-    'one-sample': 'the population mean equals the reference value',
-  } as Record<string, string>,
   powerAtSmallestEffect: (claim: string, power: string, smallest: string) =>
     `This does not show that ${claim}: the test had ${power} power to detect a difference of ${smallest}.`,
   minimumDetectable: (claim: string, amount: string) =>
@@ -102,4 +195,48 @@ export const adjustNames: Record<string, string> = {
 };
 
 /** Symbols of effect sizes in compact strings. */
-export const effectSymbols: Record<string, string> = {'hedges-g': 'g'};
+export const effectSymbols: Record<string, string> = {
+  'hedges-g': 'g',
+  'rank-biserial': 'r_rb',
+  'eta-squared': 'η²',
+  'omega-squared': 'ω²',
+  'epsilon-squared': 'ε²',
+  'cramers-v': 'V',
+  'cohens-w': 'w',
+  'cohens-h': 'h',
+  'odds-ratio': 'OR',
+  'risk-difference': 'RD',
+  'proportion-positive': 'π+',
+  r: 'r',
+  rho: 'ρ',
+  'tau-b': 'τ_b',
+  'r-squared': 'R²',
+};
+
+/** Names of effect sizes in sentences. */
+export const effectNames: Record<string, string> = {
+  'hedges-g': 'Hedges’ g',
+  'rank-biserial': 'the rank-biserial correlation',
+  'eta-squared': 'η²',
+  'omega-squared': 'ω²',
+  'epsilon-squared': 'ε²',
+  'cramers-v': 'Cramér’s V',
+  'cohens-w': 'Cohen’s w',
+  'cohens-h': 'Cohen’s h',
+  'odds-ratio': 'the odds ratio',
+  r: 'r',
+  rho: 'ρ',
+  'tau-b': 'τ_b',
+  'r-squared': 'R²',
+  'proportion-positive': 'the proportion of positive differences',
+};
+
+/** Effects bounded by 1 in magnitude, printed without a leading zero. */
+export const unitBoundedEffects = new Set(['rank-biserial', 'eta-squared', 'omega-squared', 'epsilon-squared', 'cramers-v', 'cohens-w', 'r', 'rho', 'tau-b', 'r-squared', 'risk-difference', 'proportion-positive']);
+
+/** Symbols of test statistics. */
+export const statisticSymbols: Record<string, string> = {
+  'chi-square': 'χ²',
+  'X-squared': 'χ²',
+  chisq: 'χ²',
+};

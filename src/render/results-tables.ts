@@ -1,59 +1,92 @@
 import type {PhrasingContent, Table, TableRow} from 'mdast';
-import {blockNumbers} from '../interpret/block-numbers.js';
+import {blockNumbers, type BlockNumbers} from '../interpret/block-numbers.js';
 import {formatFixed, formatP, formatUnitBounded} from '../interpret/format-number.js';
 import type {InterpretedBlock} from '../interpret/result-record.js';
+import {capitalize, effectNames} from '../interpret/wording.js';
 
 /**
- * GFM tables of a block: descriptives per group, then (for tests) one row
- * with the statistic, p, decision, estimate and effect size.
+ * GFM tables of a block: descriptives per group (numeric outcomes) or the
+ * observed counts (categorical ones), one row with the test, and the
+ * post-hoc comparisons when there are any.
  */
 export function resultsTables(block: InterpretedBlock): Table[] {
+  const numbers = blockNumbers(block.computed, block.result.p_adjusted ?? block.result.p);
+  return [descriptivesTable(block, numbers), countsTable(block), testTable(block, numbers), posthocTable(block, numbers)].filter(
+    (t): t is Table => t !== undefined,
+  );
+}
+
+function descriptivesTable(block: InterpretedBlock, numbers: BlockNumbers): Table | undefined {
   const {result, computed} = block;
-  const numbers = blockNumbers(computed, result.p_adjusted ?? result.p);
+  const entries = Object.entries(result.groups);
+  if (entries.length === 0) return undefined;
   const d = numbers.summaryDecimals;
   const r = numbers.recordedDecimals;
-  const unit = computed.units ? ` (${computed.units})` : '';
-  const descriptives = table(
-    [groupHeader(block), 'n', `Mean${unit}`, 'SD', 'Median', 'Min', 'Max'],
-    Object.entries(result.groups).map(([label, g]) => [
-      label, String(g.n), formatFixed(g.mean, d), formatFixed(g.sd, d), formatFixed(g.median, d), formatFixed(g.min, r), formatFixed(g.max, r),
-    ]),
+  const unit = computed.units && computed.design.kind !== 'bivariate' ? ` (${computed.units})` : '';
+  const header = computed.design.kind === 'paired' || computed.design.kind === 'bivariate' ? 'Variable' : computed.spec.by ?? 'Sample';
+  return table(
+    [header, 'n', `Mean${unit}`, 'SD', 'Median', 'Min', 'Max'],
+    entries.map(([label, g]) => [label, String(g.n), formatFixed(g.mean, d), formatFixed(g.sd, d), formatFixed(g.median, d), formatFixed(g.min, r), formatFixed(g.max, r)]),
   );
-  if (result.p === undefined || !result.estimate || !result.effect) return [descriptives];
-  const adjusted = result.p_adjusted != null;
+}
+
+function countsTable(block: InterpretedBlock): Table | undefined {
+  const {design, spec} = block.computed;
+  if (design.kind === 'contingency') {
+    return table([`${spec.y} \\ ${spec.by}`, ...design.columns], design.rows.map((row, i) => [row, ...design.counts[i]!.map(String)]));
+  }
+  if (design.kind === 'paired-categorical') {
+    return table([`${design.first} \\ ${design.second}`, ...design.levels], design.levels.map((row, i) => [row, ...design.table[i]!.map(String)]));
+  }
+  if (design.kind === 'counts') {
+    const total = design.counts.reduce((a, b) => a + b, 0);
+    const expected = design.expected ?? design.levels.map(() => 1 / design.levels.length);
+    return table([String(spec.y), 'Observed', 'Expected'], design.levels.map((level, i) => [level, String(design.counts[i]), formatFixed(expected[i]! * total, 1)]));
+  }
+  if (design.kind === 'proportion') {
+    return table(['Successes', 'Trials', 'Proportion'], [[String(design.successes), String(design.trials), formatUnitBounded(design.successes / design.trials, 3)]]);
+  }
+  return undefined;
+}
+
+function testTable(block: InterpretedBlock, numbers: BlockNumbers): Table | undefined {
+  const {result, computed} = block;
+  if (result.p === undefined) return undefined;
   const p = (value: number) => {
     const {relation, text} = formatP(value, result.alpha);
     return relation === '=' ? text : `${relation} ${text}`;
   };
   const level = `${Math.round(computed.spec.confidence * 1000) / 10}% CI`;
   const alpha = formatUnitBounded(result.alpha!, 3).replace(/0+$/, '');
-  const test = table(
-    [
-      'Test', 'Statistic', 'p', ...(adjusted ? ['Adjusted p'] : []), `Decision (α = ${alpha})`,
-      `${estimateHeader(block)} [${level}]`, `Hedges’ g [${level}]`,
-    ],
-    [[
-      result.title,
-      numbers.statistic,
-      p(result.p),
-      ...(adjusted ? [p(result.p_adjusted!)] : []),
-      result.decision === 'reject' ? 'reject H₀' : 'fail to reject H₀',
-      `${numbers.withUnits(result.estimate.value)} ${numbers.estimateCi.replace(/^.*CI /, '')}`,
-      `${formatFixed(result.effect.value, 2)} ${numbers.effect.replace(/^.*CI /, '')}`,
-    ]],
+  const adjusted = result.p_adjusted != null;
+  const columns: [string, string][] = [
+    ['Test', result.title],
+    ['Statistic', numbers.statistic],
+    ['p', p(result.p)],
+  ];
+  if (adjusted) columns.push(['Adjusted p', p(result.p_adjusted!)]);
+  columns.push([`Decision (α = ${alpha})`, result.decision === 'reject' ? 'reject H₀' : 'fail to reject H₀']);
+  if (result.estimate) {
+    columns.push([`${capitalize(result.estimate.name)} [${level}]`, `${numbers.withUnits(result.estimate.value)} ${numbers.estimateCi.replace(/^.*CI /, '')}`]);
+  }
+  if (result.effect && numbers.effect) {
+    columns.push([`${capitalize(effectNames[result.effect.name] ?? result.effect.name)} [${level}]`, numbers.effect.replace(/^[^=]*= /, '').replace(/, [\d.]+% CI /, ' ')]);
+  }
+  return table(columns.map(([header]) => header), [columns.map(([, cell]) => cell)]);
+}
+
+function posthocTable(block: InterpretedBlock, numbers: BlockNumbers): Table | undefined {
+  const comparisons = block.result.posthoc;
+  if (!comparisons?.length) return undefined;
+  const level = `${Math.round(block.computed.spec.confidence * 1000) / 10}% CI`;
+  const d = numbers.estimateDecimals;
+  return table(
+    ['Comparison', 'Difference', `Simultaneous ${level}`, 'Adjusted p'],
+    comparisons.map((c) => {
+      const {relation, text} = formatP(c.p_adjusted, block.result.alpha);
+      return [`${c.b} − ${c.a}`, formatFixed(c.estimate, d), c.ci ? `[${formatFixed(c.ci[0], d)}, ${formatFixed(c.ci[1], d)}]` : '—', relation === '=' ? text : `${relation} ${text}`];
+    }),
   );
-  return [descriptives, test];
-}
-
-function groupHeader(block: InterpretedBlock): string {
-  const {spec, design} = block.computed;
-  if (design.kind === 'paired') return 'Measurement';
-  return spec.by ?? 'Sample';
-}
-
-function estimateHeader(block: InterpretedBlock): string {
-  const name = block.result.estimate!.name;
-  return name.charAt(0).toUpperCase() + name.slice(1);
 }
 
 function table(header: readonly string[], rows: readonly (readonly string[])[]): Table {
@@ -61,11 +94,7 @@ function table(header: readonly string[], rows: readonly (readonly string[])[]):
     type: 'tableRow',
     children: cells.map((cell) => ({type: 'tableCell', children: [text(cell)]})),
   });
-  return {
-    type: 'table',
-    align: header.map((_, i) => (i === 0 ? 'left' : 'right')),
-    children: [row(header), ...rows.map(row)],
-  };
+  return {type: 'table', align: header.map((_, i) => (i === 0 ? 'left' : 'right')), children: [row(header), ...rows.map(row)]};
 }
 
 function text(value: string): PhrasingContent {

@@ -21,8 +21,18 @@ export interface BlockSpec {
   readonly y: string | readonly [string, string];
   readonly by: string | undefined;
   readonly levels: readonly string[] | undefined;
-  readonly x: string | undefined;
+  /** Predictor column(s): one for correlation, one or more for regression. */
+  readonly x: readonly string[] | undefined;
   readonly mu: number | undefined;
+  /** The level of `y` counted as a success (proportion tests). */
+  readonly success: string | undefined;
+  /** Expected proportions per level of `y` (goodness of fit). */
+  readonly expected: Readonly<Record<string, number>> | undefined;
+  readonly posthoc: 'tukey' | 'games-howell' | 'dunn' | 'none' | undefined;
+  /** Continuity correction of a 2x2 chi-square test. */
+  readonly correction: 'yates' | 'none';
+  /** Fit an intercept in linear regression. */
+  readonly intercept: boolean;
   readonly alternative: Alternative;
   readonly alpha: number;
   readonly confidence: number;

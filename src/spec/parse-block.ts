@@ -4,13 +4,13 @@ import {methodIds, methods} from '../methods/registry.js';
 import {UserError, type Place} from '../user-error.js';
 import {chartKinds, showParts, type BlockSpec, type ShowPart} from './block-spec.js';
 import type {DocumentSettings} from './parse-settings.js';
-import {levelRules, readChoice, readNumber, readString, readStringList, type ValueContext} from './read-value.js';
+import {levelRules, readBoolean, readChoice, readNumber, readString, readStringList, type ValueContext} from './read-value.js';
 import {didYouMean} from './suggest.js';
 
 /** Keys a block may hold (contract §3). */
 export const blockKeys = [
   'id', 'data', 'where', 'test', 'y', 'by', 'levels', 'x', 'mu', 'success', 'alternative', 'alpha',
-  'family', 'smallest-effect', 'posthoc', 'chart', 'show', 'caption', 'expected',
+  'family', 'smallest-effect', 'posthoc', 'chart', 'show', 'caption', 'expected', 'correction', 'intercept',
 ] as const;
 
 const idPattern = /^[a-z][a-z0-9_-]*$/;
@@ -68,25 +68,20 @@ export function parseBlock(body: string, origin: Place, fence: Place, settings: 
       hint: didYouMean(method, methodIds, `Available: ${methodIds.join(', ')}.`),
     });
   }
-  const design = methods.get(method)?.design ?? 'none';
+  const definition = methods.get(method);
+  const design = definition?.design ?? 'none';
   const yContext = required('y', 'Name the outcome column, e.g. `y: strength`.');
-  const y = readY(yContext, design === 'paired');
+  const y = readY(yContext, design === 'paired' || design === 'paired-categorical' || (method === 'auto' && isSeq(yContext.node)));
   const by = optional('by', readString);
-  if (design === 'two-group' && by === undefined) {
-    throw new UserError(`\`${method}\` compares two groups and needs \`by\``, {
-      ruleId: 'missing-by',
-      place: fence,
-      hint: 'Add the grouping column, e.g. `by: supplier`.',
-    });
-  }
+  const needs = (wanted: boolean, key: string, why: string, hint: string) => {
+    if (wanted && !values.has(key)) throw new UserError(`\`${method}\` ${why} and needs \`${key}\``, {ruleId: `missing-${key}`, place: fence, hint});
+  };
+  needs(['two-group', 'k-group', 'contingency'].includes(design), 'by', 'compares groups', 'Add the grouping column, e.g. `by: supplier`.');
+  needs(design === 'bivariate', 'x', 'relates two columns', 'Add the predictor column, e.g. `x: cement_content`.');
+  needs(definition?.needsMu === true, 'mu', 'tests against a null value', 'Add the value under the null hypothesis, e.g. `mu: 30` (or `mu: 0.5` for a proportion).');
+  needs(definition?.needsSuccess === true, 'success', 'counts successes', 'Name the level of `y` that counts as a success, e.g. `success: pass`.');
+  needs(definition?.needsSmallestEffect === true, 'smallest-effect', 'tests equivalence', 'Declare the equivalence margin in the outcome\'s units, e.g. `smallest-effect: 2`.');
   const mu = optional('mu', (context) => readNumber(context));
-  if (methods.get(method)?.needsMu && mu === undefined) {
-    throw new UserError(`\`${method}\` needs the null value \`mu\``, {
-      ruleId: 'missing-mu',
-      place: fence,
-      hint: 'Add the mean under the null hypothesis, e.g. `mu: 30`.',
-    });
-  }
   const show = optional('show', (context) => new Set(readStringList(context).map((part) => {
     if (!(showParts as readonly string[]).includes(part)) {
       throw new UserError(`\`show\` lists unknown part \`${part}\``, {
@@ -106,8 +101,13 @@ export function parseBlock(body: string, origin: Place, fence: Place, settings: 
     y,
     by,
     levels: optional('levels', readStringList),
-    x: optional('x', readString),
+    x: optional('x', readStringList),
     mu,
+    success: optional('success', readString),
+    expected: optional('expected', readProportions),
+    posthoc: optional('posthoc', (c) => readChoice(c, ['tukey', 'games-howell', 'dunn', 'none'] as const)),
+    correction: optional('correction', (c) => readChoice(c, ['yates', 'none'] as const)) ?? 'none',
+    intercept: optional('intercept', readBoolean) ?? true,
     alternative: optional('alternative', (c) => readChoice(c, ['two-sided', 'greater', 'less'] as const)) ?? 'two-sided',
     alpha: optional('alpha', (c) => readNumber(c, levelRules.alpha)) ?? settings.alpha,
     confidence: settings.confidence,
@@ -152,4 +152,18 @@ function placeOfText(context: ValueContext): Place {
   const place = placeOfValue(context);
   const quoted = isScalar(context.node) && (context.node.type === 'QUOTE_DOUBLE' || context.node.type === 'QUOTE_SINGLE');
   return quoted ? {line: place.line, column: place.column + 1} : place;
+}
+
+/** `expected: {red: 0.5, green: 0.25, blue: 0.25}`: non-negative proportions. */
+function readProportions(context: ValueContext): Record<string, number> {
+  const proportions: Record<string, number> = Object.create(null) as Record<string, number>;
+  const hint = 'Example: `expected: {pass: 0.9, fail: 0.1}` (proportions per level of y, summing to 1).';
+  for (const {key, valueNode} of mappingEntries(context.yaml, context.node, '`expected`', hint)) {
+    proportions[key] = readNumber({yaml: context.yaml, key, node: valueNode}, {min: 0, max: 1, hint});
+  }
+  const total = Object.values(proportions).reduce((sum, p) => sum + p, 0);
+  if (Math.abs(total - 1) > 1e-9) {
+    throw new UserError(`\`expected\` proportions sum to ${total}, not 1`, {ruleId: 'invalid-value', place: placeOfValue(context), hint});
+  }
+  return proportions;
 }

@@ -1,6 +1,7 @@
-import type {Column} from '../data/column.js';
-import {placeOfKey, type BlockSpec} from '../spec/block-spec.js';
-import {UserError} from '../user-error.js';
+import type {Column} from '../../data/column.js';
+import {placeOfKey, type BlockSpec} from '../../spec/block-spec.js';
+import {UserError} from '../../user-error.js';
+import {labelReader, sortLevels} from './columns.js';
 
 /**
  * The groups of a block: the declared `levels` in their order, or every
@@ -9,17 +10,14 @@ import {UserError} from '../user-error.js';
  */
 export function groupLevels(spec: BlockSpec, by: Column | undefined, keep: Uint8Array) {
   if (by === undefined) return {levels: ['all'], labelOf: (_row: number): string | null => 'all'};
-  const labelOf = (row: number): string | null => {
-    if (by.kind === 'string') return by.values[row] ?? null;
-    return by.missing[row] ? null : String(by.values[row]);
-  };
+  const labelOf = labelReader(by);
   const present = new Set<string>();
   for (let row = 0; row < keep.length; row++) {
     const label = keep[row] ? labelOf(row) : null;
     if (label !== null) present.add(label);
   }
   if (!spec.levels) {
-    return {levels: [...present].sort((a, b) => a.localeCompare(b, 'en', {numeric: true})), labelOf};
+    return {levels: sortLevels(present), labelOf};
   }
   for (const level of spec.levels) {
     if (present.has(level)) continue;
