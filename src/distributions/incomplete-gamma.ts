@@ -14,13 +14,13 @@ import {poissonTerm} from './poisson-term.js';
  *
  * The continued-fraction side is below ½ (the median lies below the mean a;
  * Chen & Rubin 1986, Stat. Probab. Lett. 4:281), so P = 1 - Q there loses
- * nothing. The series side
- * exceeds ½ between the median and a + 1, and further down for a below
- * about 1; Q then comes from the continued fraction (which converges for all
- * x > 0, slowly for small x) when x ≥ 1, and for x < 1 from @stdlib's
- * `gammainc` (Boost's tgamma_small_upper_part, DiDonato & Morris 1986, ACM
- * TOMS 12:377), accurate there. @stdlib's `gammainc` is not used elsewhere:
- * at a = 5000 it returns 2 correct digits near x = a (its large-a branch).
+ * nothing; on the series side Q = 1 - P while P ≤ 0.7. P exceeds 0.7 there
+ * only for a below about 6; Q then comes from the continued fraction (which
+ * converges for all x > 0, slowly for small x) when x ≥ 1, and for x < 1
+ * from @stdlib's `gammainc` (Boost's tgamma_small_upper_part, DiDonato &
+ * Morris 1986, ACM TOMS 12:377), accurate there. @stdlib's `gammainc` is
+ * not used elsewhere: at a = 5000 it returns 2 correct digits near x = a
+ * (its large-a branch).
  */
 
 /** Σ xⁿ / ((a+1)…(a+n)), n ≥ 0. */
@@ -64,7 +64,8 @@ export function incompleteGamma(a: number, x: number, upper: boolean): number {
   if (x < a + 1) {
     const lower = term * lowerSeries(a, x);
     if (!upper) return lower;
-    if (lower <= 0.5) return 1 - lower;
+    // 1 - lower keeps relative precision (within 2.3 times lower's error) up to 0.7.
+    if (lower <= 0.7) return 1 - lower;
     return x >= 1 ? a * term * upperFraction(a, x) : gammainc(x, a, true, true);
   }
   const q = a * term * upperFraction(a, x);

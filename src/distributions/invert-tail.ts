@@ -36,7 +36,9 @@ export function invertTail(
       else lo = x;
       step = sign * -1;
     } else {
-      const d = sign * (Math.log(area) - logP);
+      // log of the ratio, not a difference of logs near -690 that would carry 1e-13.
+      const ratio = area / p;
+      const d = sign * (ratio > 0 && ratio < Infinity ? Math.log(ratio) : Math.log(area) - logP);
       if (d === 0) return x;
       if (d < 0) lo = x;
       else hi = x;

@@ -174,8 +174,8 @@ describe('properties (fast-check)', () => {
       fc.property(fc.integer({min: 1, max: 300}), p, u, (m, q, v) => {
         const k = Math.max(1, Math.floor(v * m));
         const step = binomialCdf(k, m, q) - binomialCdf(k - 1, m, q);
-        // Each cdf is within a few ulps of 1 or less.
-        return step >= 0 && Math.abs(step - binomialPmf(k, m, q)) <= 1e-15;
+        // Each cdf carries a few ulps of a number up to 1.
+        return step >= 0 && Math.abs(step - binomialPmf(k, m, q)) <= 2e-15;
       }),
     );
   });

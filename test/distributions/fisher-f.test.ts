@@ -159,7 +159,8 @@ describe('properties (fast-check)', () => {
   const x = fc.double({min: 1e-3, max: 1e3, noNaN: true});
 
   it('cdf + sf = 1', () => {
-    fc.assert(fc.property(x, df, df, (v, a, b) => Math.abs(fCdf(v, a, b) + fSf(v, a, b) - 1) <= 2e-15));
+    // The incomplete beta's continued fraction keeps ~14.5 digits at df near 0.2.
+    fc.assert(fc.property(x, df, df, (v, a, b) => Math.abs(fCdf(v, a, b) + fSf(v, a, b) - 1) <= 4e-15));
   });
 
   it('cdf is non-decreasing and sf non-increasing in x', () => {

@@ -6,9 +6,10 @@ import {lre} from '../helpers/lre.js';
 describe('incompleteGamma', () => {
   it('matches closed forms at a = 1 and a = 2', () => {
     // Q(1, x) = e^-x and Q(2, x) = e^-x (1 + x): common practice, no source
+    // Loader's term is exp(-D) with D ≈ x here, and D carries a few ulps of itself: 13 digits at x = 300.
     for (const x of [1e-8, 0.3, 1, 7, 300]) {
-      expect(lre(incompleteGamma(1, x, true), Math.exp(-x))).toBeGreaterThanOrEqual(13.5);
-      expect(lre(incompleteGamma(2, x, true), Math.exp(-x) * (1 + x))).toBeGreaterThanOrEqual(13.5);
+      expect(lre(incompleteGamma(1, x, true), Math.exp(-x))).toBeGreaterThanOrEqual(x < 10 ? 14.5 : 13);
+      expect(lre(incompleteGamma(2, x, true), Math.exp(-x) * (1 + x))).toBeGreaterThanOrEqual(x < 10 ? 14.5 : 13);
     }
     expect(lre(incompleteGamma(1, 1e-8, false), -Math.expm1(-1e-8))).toBeGreaterThanOrEqual(14);
   });
