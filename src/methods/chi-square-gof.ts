@@ -12,7 +12,7 @@ import type {CountsDesign, MethodDefinition} from './types.js';
  * exactly (as R's chisq.test(rescale.p = TRUE)).
  *
  * Effect size: Cohen's w = √(X²/N) (Cohen 1988, "Statistical Power Analysis
- * for the Behavioral Sciences", 2nd ed., §7.2), with an interval for the
+ * for the Behavioral Sciences", 2nd ed., ch. 7), with an interval for the
  * population w = √(λ/N) by inverting the noncentral chi-square distribution
  * (shared/chi-square-noncentrality.ts). Warns when an expected count is
  * below 5.

@@ -13,12 +13,12 @@ import type {ContingencyDesign, MethodDefinition} from './types.js';
  * (Yates 1934, JRSS Suppl. 1:217).
  *
  * Effect size: Cramér's V = √(X² / (N (k-1))), k = min(r, c) (Cramér 1946,
- * "Mathematical Methods of Statistics", §21.9), always from the uncorrected
+ * "Mathematical Methods of Statistics"), always from the uncorrected
  * X², with an interval for the population V by inverting the noncentral
  * chi-square distribution of X² (shared/chi-square-noncentrality.ts).
  * Reports the expected counts, Pearson residuals (O - E)/√E and
  * standardized residuals (O - E)/√(E (1 - r_i/N)(1 - c_j/N)) (Agresti 2007,
- * §2.4.5), and warns when an expected count is below 5.
+ * §2.4), and warns when an expected count is below 5.
  *
  * @example party identification by gender (Agresti 2007, p. 39): X²(2) = 30.07, p = 2.95e-7
  */

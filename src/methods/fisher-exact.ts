@@ -7,7 +7,7 @@ import type {Alternative, ContingencyDesign, MethodDefinition} from './types.js'
 
 /**
  * Fisher's exact test for a 2×2 table (Fisher 1935, JRSS 98:39; "The Design
- * of Experiments", §2): conditional on the margins, the count a in the
+ * of Experiments", ch. 2): conditional on the margins, the count a in the
  * first cell is hypergeometric under independence. One-sided p-values are
  * its tails; the two-sided p is the total probability of the tables no more
  * probable than the observed one, counting tables within a relative 1e-7 of

@@ -1,9 +1,10 @@
-import {normalCdf, normalSf, normalTwoSidedP} from '../distributions/normal.js';
 import {correlationPairs} from './shared/correlation-pairs.js';
 import {fisherZInterval, fisherZSe} from './shared/fisher-z-interval.js';
 import {kendallCounts, type KendallCounts} from './shared/kendall-counts.js';
 import {discordantTails, KENDALL_EXACT_MAX_N} from './shared/kendall-exact.js';
-import type {Alternative, BivariateDesign, MethodDefinition} from './types.js';
+import {sidedP} from './shared/sided-p.js';
+import {zTestP} from './shared/z-test-p.js';
+import type {BivariateDesign, MethodDefinition} from './types.js';
 
 /**
  * Kendall's rank correlation tau-b (Kendall 1938, Biometrika 30:81–93; ties:
@@ -45,30 +46,22 @@ export const kendall: MethodDefinition<BivariateDesign> = {
       return {
         statistic: {name: 'T', value: counts.concordant},
         df: null,
-        p: tailP(tails.atMost, tails.atLeast, options.alternative),
+        // Fewer discordant pairs than expected is evidence of a positive association.
+        p: sidedP({greater: tails.atMost, less: tails.atLeast}, options.alternative),
         ...common,
         variant: 'exact',
       };
     }
     const z = (counts.concordant - counts.discordant) / Math.sqrt(tieCorrectedVariance(counts));
-    const p =
-      options.alternative === 'greater' ? normalSf(z) : options.alternative === 'less' ? normalCdf(z) : normalTwoSidedP(z);
     return {
       statistic: {name: 'z', value: z},
       df: null,
-      p,
+      p: zTestP(z, options.alternative),
       ...common,
       variant: counts.xTies.length + counts.yTies.length > 0 ? 'normal approximation with tie correction' : 'normal approximation',
     };
   },
 };
-
-/** p from P(D ≤ d) (evidence of positive association) and P(D ≥ d). */
-function tailP(atMost: number, atLeast: number, alternative: Alternative): number {
-  if (alternative === 'greater') return atMost;
-  if (alternative === 'less') return atLeast;
-  return Math.min(1, 2 * Math.min(atMost, atLeast));
-}
 
 function tieCorrectedVariance({n, xTies, yTies}: KendallCounts): number {
   const sum = (ties: readonly number[], f: (t: number) => number) => ties.reduce((s, t) => s + f(t), 0);

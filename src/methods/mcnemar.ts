@@ -24,9 +24,9 @@ const EXACT_BELOW = 25;
  * Estimate: the change in the proportion at the second level, (b - c)/n,
  * second measurement minus first, with Newcombe's paired hybrid score
  * interval (shared/newcombe-interval.ts). Effect: the conditional odds ratio
- * b/c with the exact interval from the Clopper–Pearson interval of
- * π = b/(b + c), ψ = π/(1 - π) (Breslow & Day 1980, "Statistical Methods in
- * Cancer Research" vol. 1, §5.2).
+ * b/c: given b + c, b is binomial with π = ψ/(1 + ψ), so the exact
+ * interval maps the Clopper–Pearson interval of π = b/(b + c) through
+ * ψ = π/(1 - π), consistent with the exact test.
  */
 export const mcnemar: MethodDefinition<PairedCategoricalDesign> = {
   id: 'mcnemar',

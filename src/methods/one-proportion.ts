@@ -6,7 +6,7 @@ import type {MethodDefinition, ProportionDesign} from './types.js';
 /**
  * The one-proportion z test (score test): z = (p̂ - p₀) / √(p₀(1 - p₀)/n),
  * with the standard error under the null (Agresti 2013, "Categorical Data
- * Analysis", 3rd ed., §1.3.3; R's prop.test(correct = FALSE), whose X² is
+ * Analysis", 3rd ed., §1.3; R's prop.test(correct = FALSE), whose X² is
  * z²). The Wilson interval (shared/wilson-interval.ts) inverts this same
  * test, so the interval and the p-value agree. Warns when n·p₀ or
  * n·(1 - p₀) is below 5 and points to the exact `binomial` test.

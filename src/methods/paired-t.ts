@@ -1,7 +1,4 @@
-import {hedgesG} from './shared/hedges-g.js';
-import {summarize} from './shared/summarize.js';
-import {tInference} from './shared/t-inference.js';
-import {tSensitivity} from './shared/t-sensitivity.js';
+import {oneSampleTOutcome} from './shared/one-sample-t-outcome.js';
 import type {MethodDefinition, PairedDesign} from './types.js';
 
 /**
@@ -16,42 +13,9 @@ export const pairedT: MethodDefinition<PairedDesign> = {
   design: 'paired',
   compute({first, second}, options) {
     const differences = second.values.map((value, i) => value - first.values[i]!);
-    const {n, mean, sd} = summarize(differences);
-    const df = n - 1;
-    const inference = tInference({
-      estimate: mean,
-      se: sd / Math.sqrt(n),
-      df,
-      nullValue: options.mu,
-      alternative: options.alternative,
-      confidence: options.confidence,
+    return oneSampleTOutcome(differences, options, {
+      estimate: `mean difference (${second.label} - ${first.label})`,
+      standardizer: 'standard deviation of the differences',
     });
-    return {
-      statistic: {name: 't', value: inference.t},
-      df,
-      p: inference.p,
-      estimate: {
-        name: `mean difference (${second.label} - ${first.label})`,
-        value: mean,
-        ci: inference.ci,
-        level: options.confidence,
-      },
-      effect: hedgesG({
-        d: (mean - options.mu) / sd,
-        t: inference.t,
-        df,
-        scale: 1 / Math.sqrt(n),
-        alternative: options.alternative,
-        confidence: options.confidence,
-        standardizer: 'standard deviation of the differences',
-      }),
-      sensitivity: tSensitivity({
-        ncpPerUnit: Math.sqrt(n) / sd,
-        df,
-        alpha: options.alpha,
-        alternative: options.alternative,
-        smallestEffect: options.smallestEffect,
-      }),
-    };
   },
 };

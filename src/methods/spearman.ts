@@ -3,8 +3,9 @@ import {correlationT} from './shared/correlation-t-test.js';
 import {fisherZInterval, fisherZSe} from './shared/fisher-z-interval.js';
 import {midRanks} from './shared/mid-ranks.js';
 import {pearsonR} from './shared/pearson-r.js';
+import {sidedP} from './shared/sided-p.js';
 import {SPEARMAN_EXACT_MAX_N, spearmanExactTails} from './shared/spearman-exact.js';
-import type {Alternative, BivariateDesign, MethodDefinition} from './types.js';
+import type {BivariateDesign, MethodDefinition} from './types.js';
 
 /**
  * Spearman's rank correlation rho: Pearson's r of the mid-ranks (Spearman
@@ -47,15 +48,10 @@ export const spearman: MethodDefinition<BivariateDesign> = {
     return {
       statistic: {name: 'S', value: ((n * n * n - n) * (1 - rho)) / 6},
       df: null,
-      p: exactP(tails, options.alternative),
+      p: sidedP(tails, options.alternative),
       ...common,
       variant: ties ? 'exact permutation distribution, conditional on the ties' : 'exact permutation distribution',
     };
   },
 };
 
-function exactP(tails: {greater: number; less: number}, alternative: Alternative): number {
-  if (alternative === 'greater') return tails.greater;
-  if (alternative === 'less') return tails.less;
-  return Math.min(1, 2 * Math.min(tails.greater, tails.less));
-}

@@ -11,7 +11,7 @@ import type {Alternative, ContingencyDesign, MethodDefinition} from './types.js'
 /**
  * The two-proportion z test with the pooled standard error (Fleiss, Levin &
  * Paik 2003, "Statistical Methods for Rates and Proportions", 3rd ed.,
- * ch. 2; R's prop.test(correct = FALSE), whose X² is z²):
+ * ch. 3; R's prop.test(correct = FALSE), whose X² is z²):
  * z = (p₂ - p₁) / √(p̄(1 - p̄)(1/n₁ + 1/n₂)), p̄ the pooled proportion, for
  * the proportion of `success` in the second level of `by` minus the first.
  *

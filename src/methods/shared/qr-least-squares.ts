@@ -4,8 +4,9 @@
  * vector, 5.2.1 for the factorization, §5.3.3 for its use in least
  * squares), never the normal equations, whose condition number is the
  * square of X's (Golub & Van Loan §5.3.2; Longley 1967, JASA 62:819–841).
- * The backward error is of order ε‖X‖, so coefficients lose about
- * log10 κ(X) digits rather than 2·log10 κ(X).
+ * QR is backward stable, so when the residuals are small the coefficients
+ * lose about log10 κ(X) digits, where the normal equations lose
+ * 2·log10 κ(X) whatever the residuals.
  *
  * Rank: a column whose remaining norm after the earlier reflections is below
  * 1e-7 of its original norm is reported as collinear, the default tolerance

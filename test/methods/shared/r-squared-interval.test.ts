@@ -1,10 +1,11 @@
 import {describe, expect, it} from 'vitest';
-import {noncentralFTail} from '../../../src/methods/shared/noncentral-f.js';
-import {rSquaredInterval} from '../../../src/methods/shared/r-squared-interval.js';
+import {noncentralFCdf, noncentralFSf} from '../../../src/distributions/noncentral-f.js';
+import {EXACT_MAX_LAMBDA, rSquaredInterval} from '../../../src/methods/shared/r-squared-interval.js';
 import {lre} from '../../helpers/lre.js';
 
 // mpmath 1.3.0 at 40 digits: λ_L, λ_U solving P(F > F_obs; λ_L) = 0.025 and P(F ≤ F_obs; λ_U) = 0.025
-// with the 40-digit Poisson mixture (bisection, then mpmath.findroot 'anderson' to 1e-30), mapped
+// with the Poisson mixture Σ_j Pois(j; λ/2) I_w(df1/2 + j, df2/2) summed from the mode with an
+// mpmath.betainc start (bisection, then mpmath.findroot 'anderson' to 1e-30), mapped
 // to λ/(λ + n). F values are the NIST StRD certified F of each file, or round numbers.
 const cases = [
   {name: 'Norris (certified F)', f: 5436385.54079785, df1: 1, df2: 34, n: 36, ci: [0.99998863248016760223, 0.99999566739549115246]},
@@ -30,16 +31,18 @@ describe('R² interval by noncentral-F inversion', () => {
     expect(rSquaredInterval(6.7552445824012241e-3, 5, 15, 21, 0.95)).toEqual([0, 0]);
   });
 
-  it('beyond λ = 5e8 uses χ²(df1, λ) ≈ λ + df1, accurate enough for R²', () => {
-    // Consistency with the exact Poisson sum (checked above against mpmath): at the λ behind each
-    // bound, the tail is within 0.1% of 0.025 (measured 0.0250191 and 0.0250191). The tail's
-    // slope in log λ is about φ(1.96)/sd(log F) ≈ 13 here, so λ is off by about 1.5e-6 relative
-    // and R² by about 1.5e-6·(1 − R²) = 2.5e-10.
-    const [f, df1, df2, n] = [6e8, 1, 100000, 100002];
-    const [lower, upper] = rSquaredInterval(f, df1, df2, n, 0.95);
-    const lambda = (r2: number) => (n * r2) / (1 - r2);
-    expect(lambda(lower)).toBeGreaterThan(5e8);
-    expect(lre(noncentralFTail(f, df1, df2, lambda(lower), true), 0.025)).toBeGreaterThanOrEqual(3);
-    expect(lre(noncentralFTail(f, df1, df2, lambda(upper), false), 0.025)).toBeGreaterThanOrEqual(3);
+  it('beyond λ = 1e7 uses the second-order expansion, consistent with the exact series', () => {
+    // Consistency with the distributions module's noncentral F (itself checked against mpmath in
+    // test/distributions/noncentral-f.test.ts): at the λ behind each bound, recovered from R², the
+    // exact tail equals the target. Measured: 0.02499999999452563, 0.02500000000954335 (df2 = 100);
+    // 0.0250005354, 0.0250005455 (df2 = 1e5, where the expansion is weakest: λ off by 4e-8).
+    for (const [f, df1, df2, digits] of [[5e7, 1, 100, 8.5], [1.5e7, 2, 1e5, 4]] as const) {
+      const n = df1 + df2 + 1;
+      const [lower, upper] = rSquaredInterval(f, df1, df2, n, 0.95);
+      const lambda = (r2: number) => (n * r2) / (1 - r2);
+      expect(lambda(lower)).toBeGreaterThan(EXACT_MAX_LAMBDA);
+      expect(lre(noncentralFSf(f, df1, df2, lambda(lower)), 0.025)).toBeGreaterThanOrEqual(digits);
+      expect(lre(noncentralFCdf(f, df1, df2, lambda(upper)), 0.025)).toBeGreaterThanOrEqual(digits);
+    }
   });
 });
