@@ -56,6 +56,15 @@ const blocks: Record<string, string> = {
   auto: 'y: y\nby: g3',
 };
 
+/** Further `auto` designs, checked for the method chosen. */
+const autoBlocks: Record<string, [string, string]> = {
+  'auto-pair': ['y: [before, after]', 'paired-t'],
+  'auto-two': ['y: y\nby: g2', 'welch-t'],
+  'auto-xy': ['x: x\ny: y', 'pearson'],
+  'auto-table': ['y: outcome\nby: g3', 'chi-square'],
+  'auto-one': ['y: y\nmu: 20', 'one-sample-t'],
+};
+
 const diagnostics = new Set(['shapiro-wilk', 'levene', 'brown-forsythe']);
 /** Independence and fit have no estimate in the data's units; their effect is the estimate. */
 const withoutEstimate = new Set(['chi-square', 'chi-square-gof']);
@@ -69,7 +78,8 @@ describe('every method of the catalogue builds in a report', () => {
   beforeAll(async () => {
     const report = Object.entries(blocks)
       .map(([method, keys]) => '```stet\n' + `id: b-${method}\ntest: ${method}\ndata: d.csv\n${keys}\nchart: none\n` + '```\n')
-      .join('\n');
+      .join('\n') +
+      Object.entries(autoBlocks).map(([id, [keys]]) => '```stet\n' + `id: ${id}\ntest: auto\ndata: d.csv\n${keys}\nchart: none\n` + '```\n').join('\n');
     const dir = await workspace({'report.md': `# All methods\n\n${report}`, 'd.csv': fixture()});
     const result = await buildReport(path.join(dir, 'report.md'), {out: path.join(dir, 'out')});
     expect(result.messages.map(String)).toEqual([]);
@@ -115,6 +125,16 @@ describe('every method of the catalogue builds in a report', () => {
     expect(results['b-auto']!['auto'].reason).toMatch(/3 independent groups/);
     expect(results['b-describe']).not.toHaveProperty('decision');
     expect(results['b-welch-t']!['groups']).toHaveProperty('p');
+  });
+
+  it('chooses from the declared design with `test: auto`, and says why', () => {
+    for (const [id, [, method]] of Object.entries(autoBlocks)) {
+      expect(results[id]!['method'], id).toBe(method);
+      expect(results[id]!['auto'].reason, id).toEqual(expect.any(String));
+      expect(results[id]!['sentence'], id).toMatch(/chosen from the declared design/);
+    }
+    expect(results['auto-xy']!['spearman'].rho).toBeCloseTo(results['b-spearman']!['estimate'].value, 14);
+    expect(results['auto-xy']!['sentence']).toMatch(/Spearman’s rank correlation, reported beside it, was ρ = /);
   });
 
   it('runs assumption checks beside normal-theory tests without switching them', () => {

@@ -1,5 +1,6 @@
 import {samplesOf} from '../compute/compute-block.js';
 import type {InterpretedBlock} from '../interpret/result-record.js';
+import {capitalize} from '../interpret/wording.js';
 import {boxPlotSpec} from './box-plot.js';
 import {renderSvg} from './render-svg.js';
 
@@ -33,6 +34,3 @@ export async function blockChart(block: InterpretedBlock): Promise<BlockChart | 
   return {svg: rendered.svg, alt};
 }
 
-function capitalize(text: string): string {
-  return text.charAt(0).toUpperCase() + text.slice(1);
-}

@@ -1,7 +1,7 @@
 /**
  * The one representation of a loaded column. Numeric columns are typed arrays
- * from the start (large data and exact decimal reading come later, and only
- * this module should need to change for them).
+ * from the start, read twice from the text: as the nearest doubles, and
+ * exactly centred on their first value.
  */
 export interface NumericColumn {
   readonly kind: 'number';
@@ -10,6 +10,15 @@ export interface NumericColumn {
   readonly values: Float64Array;
   /** 1 where the cell was empty or one of the dataset's missing markers. */
   readonly missing: Uint8Array;
+  /** The first non-missing value (0 when there is none): the centre of `centred`. */
+  readonly offset: number;
+  /**
+   * Cell minus the first non-missing cell, subtracted exactly in decimal and
+   * then rounded once (NaN where missing). Shift-invariant statistics use it:
+   * `1000000000000.4` has no exact double, its difference from
+   * `1000000000000.3` does (`exactOffsetDifference`).
+   */
+  readonly centred: Float64Array;
 }
 
 export interface StringColumn {

@@ -1,7 +1,7 @@
 import {UserError} from '../user-error.js';
 import type {Column, NumericColumn, StringColumn} from './column.js';
 import type {DatasetOptions} from './dataset-options.js';
-import {parseDecimal} from './parse-decimal.js';
+import {exactOffsetDifference, parseDecimal} from './parse-decimal.js';
 import type {CsvTable, RawColumn} from './read-csv.js';
 
 type TypeOptions = Pick<DatasetOptions, 'file' | 'decimal' | 'missing' | 'types'>;
@@ -48,19 +48,26 @@ function toNumericColumn(
 ): NumericColumn | {kind: 'failed'; row: number} {
   const n = raw.cells.length;
   const values = new Float64Array(n);
+  const centred = new Float64Array(n);
   const missing = new Uint8Array(n);
+  let offsetText: string | undefined;
   for (let row = 0; row < n; row++) {
     const text = cellText(raw, row);
     if (missingMarkers.has(text)) {
       values[row] = Number.NaN;
+      centred[row] = Number.NaN;
       missing[row] = 1;
       continue;
     }
     const value = parseDecimal(text, decimal);
     if (value === undefined) return {kind: 'failed', row};
     values[row] = value;
+    // Centred on the first value in exact decimal arithmetic (issue 3, "Numerical care").
+    offsetText ??= text;
+    centred[row] = exactOffsetDifference(text, offsetText, decimal);
   }
-  return {kind: 'number', name: raw.name, values, missing};
+  const offset = offsetText === undefined ? 0 : parseDecimal(offsetText, decimal)!;
+  return {kind: 'number', name: raw.name, values, missing, offset, centred};
 }
 
 function toStringColumn(raw: RawColumn, missingMarkers: ReadonlySet<string>): StringColumn {

@@ -65,6 +65,8 @@ export function writeSentence(block: ComputedBlock, adjustment: Adjustment | und
   parts.push(...(outcome.warnings ?? []));
   const smallest = Math.min(...samplesOf(block.design).map((s) => s.values.length));
   if (Number.isFinite(smallest) && smallest < 10 && meanMethods.has(spec.method)) parts.push(wording.smallSample(smallest));
+  const spearman = outcome.details?.['spearman'] as {rho: number; p: number} | undefined;
+  if (spearman) parts.push(wording.spearmanBeside(formatUnitBounded(spearman.rho, 2), pClause(spearman.p)));
   if (block.autoReason) parts.push(wording.autoChoice(block.autoReason));
   return parts.join(' ');
 }

@@ -144,6 +144,7 @@ export const wording = {
     (alternative ? `; with small samples, consider declaring \`test: ${alternative}\`.` : '.'),
   assumptionSpread: (statistic: string, p: string, test: string, alternative: string) =>
     `Levene’s check suggests unequal spreads (F = ${statistic}, ${p}); ${test} assumes equal spreads, so consider declaring \`test: ${alternative}\`.`,
+  spearmanBeside: (rho: string, p: string) => `Spearman’s rank correlation, reported beside it, was ρ = ${rho} (${p}).`,
   autoChoice: (reason: string) => `The test was chosen from the declared design: ${reason}.`,
   variant: (variant: string) => `The p-value is from the ${variant}.`,
   effect: (effect: string) => `The standardized effect was ${effect}.`,
@@ -181,8 +182,9 @@ function testSubject(title: string): string {
   return /^[A-Z]/.test(title) ? title : `The ${title}`;
 }
 
+/** Upper-cases a leading Latin letter only: `ω²` and `ρ` are symbols, not words. */
 export function capitalize(text: string): string {
-  return text.charAt(0).toUpperCase() + text.slice(1);
+  return /^[a-z]/.test(text) ? text.charAt(0).toUpperCase() + text.slice(1) : text;
 }
 
 /** Names of adjustment methods as written in sentences. */
@@ -232,7 +234,7 @@ export const effectNames: Record<string, string> = {
 };
 
 /** Effects bounded by 1 in magnitude, printed without a leading zero. */
-export const unitBoundedEffects = new Set(['rank-biserial', 'eta-squared', 'omega-squared', 'epsilon-squared', 'cramers-v', 'cohens-w', 'r', 'rho', 'tau-b', 'r-squared', 'risk-difference', 'proportion-positive']);
+export const unitBoundedEffects = new Set(['rank-biserial', 'eta-squared', 'omega-squared', 'epsilon-squared', 'cramers-v', 'r', 'rho', 'tau-b', 'r-squared', 'risk-difference', 'proportion-positive']);
 
 /** Symbols of test statistics. */
 export const statisticSymbols: Record<string, string> = {

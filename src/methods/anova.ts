@@ -13,14 +13,12 @@ import type {KGroupDesign, MethodDefinition} from './types.js';
  * N - k df, p from the upper tail of F. Assumes equal population variances;
  * a warning points to `welch-anova` when group SDs differ by more than 2×.
  *
- * Sums of squares are computed from shifted, centred data with compensated
- * sums (`oneWaySums`). Against the NIST StRD ANOVA certified values (SS,
- * MS, F, R², residual SD) with the data read as doubles: at least 13.1
- * digits on SiRstv, 15.1 on SmLs01–03, 10.2 on AtmWtAg, 9.9 on SmLs04–06,
- * 3.9 on SmLs07–09. The loss is the rounding of the decimals to doubles:
- * computed exactly from those doubles, the statistics agree with ours to
- * 15.7 digits; with the first value subtracted in exact decimal arithmetic
- * before conversion (the data stage's job, issue 3) every file reaches 14.5.
+ * Sums of squares are computed from the exactly centred data the data stage
+ * provides (`Sample.centred`) with compensated sums (`oneWaySums`). Against
+ * the NIST StRD ANOVA certified values (SS, MS, F, R², residual SD): at
+ * least 14.5 digits on every file, SmLs07–09 included. Read as plain doubles
+ * instead, SmLs07–09 would reach only 3.9: the decimals' rounding, not the
+ * arithmetic, is what limits them.
  *
  * Reported: the estimate is the largest minus the smallest group mean with a
  * Bonferroni-simultaneous interval (`largestDifference`); the effect is η²

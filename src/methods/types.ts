@@ -12,6 +12,14 @@ export type DesignKind = Design['kind'];
 export interface Sample {
   readonly label: string;
   readonly values: Float64Array;
+  /**
+   * Row-aligned with `values`: each value minus the column's first value,
+   * subtracted exactly in decimal before rounding (`NumericColumn.centred`).
+   * Shift-invariant statistics (SD, sums of squares) read it to keep digits
+   * that rounding the text to doubles would lose; absent when the sample
+   * was not read from decimal text (paired differences, tests).
+   */
+  readonly centred?: Float64Array;
 }
 
 export interface OneSampleDesign {

@@ -63,7 +63,24 @@ describe('inferTypes', () => {
     const [a] = await infer('a,b\nNA,1\n,2\n');
     expect(a?.kind).toBe('number');
     const [c] = await infer('c\n');
-    expect(c).toEqual({kind: 'number', name: 'c', values: new Float64Array(0), missing: new Uint8Array(0)});
+    expect(c).toEqual({kind: 'number', name: 'c', values: new Float64Array(0), missing: new Uint8Array(0), offset: 0, centred: new Float64Array(0)});
+    expect((a as NumericColumn).offset).toBe(0);
+    expect([...(a as NumericColumn).centred]).toEqual([NaN, NaN]);
+  });
+
+  it('centres numeric columns on their first value in exact decimal arithmetic', async () => {
+    // NIST StRD SmLs07 data: 1000000000000.4 and .3 are 0.1 apart, their doubles 0.0999755859375 apart.
+    const [y] = await infer('y\nNA\n1000000000000.4\n1000000000000.3\nNA\n1000000000000.5\n');
+    const numeric = y as NumericColumn;
+    expect(numeric.offset).toBe(1000000000000.4);
+    expect([...numeric.centred]).toEqual([NaN, 0, -0.1, NaN, 0.1]); // exact decimal differences, nearest doubles
+    expect(numeric.values[2]! - numeric.values[1]!).toBe(-0.0999755859375); // what parsing to doubles alone gives
+  });
+
+  it('centres forced numeric columns and decimal-comma columns too', async () => {
+    const [x] = await infer('x;y\n10000000,2;a\n10000000,1;b\n', {decimal: ',', types: {x: 'number'}}, ';');
+    expect((x as NumericColumn).offset).toBe(10000000.2);
+    expect([...(x as NumericColumn).centred]).toEqual([0, -0.1]); // NIST StRD NumAcc4 values, exact difference
   });
 
   it('forces text with types: string, keeping the missing markers', async () => {

@@ -13,6 +13,11 @@ export function example<T = Record<string, unknown>>(file: string): T {
 }
 
 export interface NistUnivariate {
+  /** The data as printed, one number per line. */
+  readonly texts: readonly string[];
+  /** Certified lag-1 autocorrelation r(1). */
+  readonly lag1: number;
+  /** The same read as the nearest doubles. */
   readonly values: Float64Array;
   readonly mean: number;
   readonly sd: number;
@@ -27,6 +32,6 @@ export function nistUnivariate(name: string): NistUnivariate {
     return Number(/:\s*(-?[\d.Ee+-]+)/.exec(line.slice(line.search(label)))![1]);
   };
   const start = lines.findIndex((l) => /^Data:\s+Y/.test(l)) + 2;
-  const values = lines.slice(start).map((l) => l.trim()).filter(Boolean).map(Number);
-  return {values: Float64Array.from(values), mean: certified(/ybar:/), sd: certified(/\s s:/)};
+  const texts = lines.slice(start).map((l) => l.trim()).filter(Boolean);
+  return {texts, values: Float64Array.from(texts, Number), mean: certified(/ybar:/), sd: certified(/\s s:/), lag1: certified(/r\(1\):/)};
 }

@@ -83,9 +83,12 @@ function splitByGroup(spec: BlockSpec, y: NumericColumn, by: ReturnType<typeof c
     const label = labelOf(row);
     if (y.missing[row] || label === null) missing++;
     else if (!buckets.has(label)) outside++;
-    else buckets.get(label)!.push(y.values[row]!);
+    else buckets.get(label)!.push(row);
   }
-  const samples: Sample[] = levels.map((level) => ({label: level, values: Float64Array.from(buckets.get(level)!)}));
+  const samples: Sample[] = levels.map((level) => {
+    const rows = buckets.get(level)!;
+    return {label: level, values: Float64Array.from(rows, (r) => y.values[r]!), centred: Float64Array.from(rows, (r) => y.centred[r]!)};
+  });
   const used = samples.reduce((total, s) => total + s.values.length, 0);
   return {samples, rows: {used, excluded_missing: missing, excluded_filter: excludedFilter, excluded_levels: outside}};
 }

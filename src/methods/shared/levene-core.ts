@@ -48,7 +48,8 @@ export function levene(samples: readonly Sample[], centre: LeveneCentre): Levene
   let n = 0;
   const means: number[] = [];
   let within = 0;
-  for (const {values} of samples) {
+  for (const sample of samples) {
+    const values = sample.centred ?? sample.values; // deviations are shift-invariant: use the exact decimal centring
     if (values.length === 0) throw new Error('levene: every group needs at least one value');
     const z = absoluteDeviations(values, centre);
     const mean = accurateMean(z);

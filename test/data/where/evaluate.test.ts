@@ -125,6 +125,8 @@ describe('evaluateWhere, properties', () => {
     name: 'x',
     values: Float64Array.from(values, (v) => v ?? Number.NaN),
     missing: Uint8Array.from(values, (v) => (v === null ? 1 : 0)),
+    offset: 0,
+    centred: Float64Array.from(values, (v) => v ?? Number.NaN),
   });
   const dataset = (columns: Column[], rowCount: number): Dataset => ({
     name: 'd', file: 'd.csv', absolutePath: '/d.csv', sha256: '', rowCount, units: {}, labels: {},
