@@ -124,6 +124,7 @@ describe('every method of the catalogue builds in a report', () => {
     expect(results['b-auto']!['method']).toBe('welch-anova');
     expect(results['b-auto']!['auto'].reason).toMatch(/3 independent groups/);
     expect(results['b-describe']).not.toHaveProperty('decision');
+    expect(results['b-describe']!['groups'].a.lag1_autocorrelation).toEqual(expect.any(Number));
     expect(results['b-welch-t']!['groups']).toHaveProperty('p');
   });
 

@@ -1,6 +1,7 @@
 import type {Dataset} from '../data/column.js';
 import {MethodError} from '../methods/method-error.js';
 import {methods} from '../methods/registry.js';
+import {lag1Autocorrelation} from '../methods/shared/lag1-autocorrelation.js';
 import {summarize, type Summary} from '../methods/shared/summarize.js';
 import type {Design, MethodDefinition, MethodOutcome, Question, Sample} from '../methods/types.js';
 import type {BlockSpec} from '../spec/block-spec.js';
@@ -38,7 +39,8 @@ export function computeBlock(declared: BlockSpec, dataset: Dataset, keep: Uint8A
   const spec = choice ? {...declared, method: choice.method} : declared;
   const definition = methods.get(spec.method);
   const {design, rows} = prepareDesign(spec, definition?.design ?? 'none', dataset, keep);
-  const outcome = definition ? runMethod(definition, design, spec) : undefined;
+  const run = definition ? runMethod(definition, design, spec) : undefined;
+  const outcome = run && choice?.method === 'pearson' ? withSpearman(run, design, spec) : run;
   const question = definition ? (definition.question ?? 'difference') : 'description';
   const outcomeColumn = typeof spec.y === 'string' ? spec.y : spec.y[0];
   const units = own(dataset.units, outcomeColumn);
@@ -51,7 +53,7 @@ export function computeBlock(declared: BlockSpec, dataset: Dataset, keep: Uint8A
     autoReason: choice?.reason,
     design,
     outcome: withUnits ? {...outcome, estimate: {...outcome.estimate!, units}} : outcome,
-    groups: Object.fromEntries(samplesOf(design).map((sample) => [sample.label, summarize(sample.values)])),
+    groups: Object.fromEntries(samplesOf(design).map((sample) => [sample.label, describeSample(sample, spec.method === 'describe')])),
     rows,
     units,
     names: {
@@ -82,6 +84,27 @@ function runMethod(definition: MethodDefinition, design: Design, spec: BlockSpec
     if (!(error instanceof MethodError)) throw error;
     throw new UserError(`\`${spec.id}\`: ${error.message}`, {ruleId: 'method-not-applicable', place: spec.place, hint: error.hint});
   }
+}
+
+/**
+ * Descriptives of a sample; `describe` blocks add the lag-1 autocorrelation
+ * of the rows in file order (a check for drift between successive
+ * measurements), computed on the exactly centred values.
+ */
+function describeSample(sample: Sample, withAutocorrelation: boolean): Summary {
+  const summary = summarize(sample.values, sample.centred);
+  if (!withAutocorrelation) return summary;
+  return {...summary, lag1_autocorrelation: lag1Autocorrelation(sample.centred ?? sample.values)};
+}
+
+/**
+ * `auto` on two numeric columns reports Spearman's rho beside Pearson's r,
+ * so a reader sees at once whether one point or a curve drives r.
+ */
+function withSpearman(outcome: MethodOutcome, design: Design, spec: BlockSpec): MethodOutcome {
+  const rank = runMethod(methods.get('spearman')!, design, spec);
+  const rho = {rho: rank.estimate?.value, ci: rank.estimate?.ci, statistic: rank.statistic, p: rank.p, variant: rank.variant};
+  return {...outcome, details: {...outcome.details, spearman: rho}};
 }
 
 /** A record's own value: column names such as `constructor` are data, not keys of Object. */

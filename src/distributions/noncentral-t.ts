@@ -20,9 +20,10 @@ import {studentTCdf, studentTSf} from './student-t.js';
  * - δ < 0: the small upper tail by quadrature of a positive integrand
  *   (noncentral-t-quadrature.ts), the cdf as its complement (≥ ½);
  * - δ > 200: either tail by the same quadrature.
- * Measured against mpmath (50 digits) for ν from 1 to 1e6 (non-integer
- * too), |δ| ≤ 40 and both tails down to 1e-250: at least 13 digits, at
- * least 14 at ordinary arguments; see test/distributions/noncentral-t.test.ts.
+ * Measured against mpmath (50-digit quadrature) on 270 cases with ν from 1
+ * to 1e6 (non-integer too), |δ| from 0.3 to 40 and t around δ and zero,
+ * both tails: at least 13.9 digits for values above 1e-20 (median 15.7) and
+ * 13.0 for values down to 1e-300; see test/distributions/noncentral-t.test.ts.
  *
  * @example noncentralTSf(31, 10, 30) // 0.5018…, where jstat gives ~1e-40
  */

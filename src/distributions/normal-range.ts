@@ -4,8 +4,9 @@ import {trapezoidWalk} from './trapezoid-walk.js';
 
 /**
  * Either tail of the range W of k independent standard normal variables,
- * which is the studentized range at ν = ∞. With x the largest value
- * (Hartley 1942, Biometrika 32:334; Copenhaver & Holland 1988, eq. 2),
+ * which is the studentized range at ν = ∞. With x the largest value (the
+ * classical form, Tippett 1925, Biometrika 17:364-387; the inner integral
+ * of Copenhaver & Holland 1988),
  *
  *   P(W ≤ w) = k ∫ φ(x) D(x)^{k-1} dx,          D(x) = Φ(x) - Φ(x - w),
  *   P(W > w) = k ∫ φ(x) [Φ(x)^{k-1} - D(x)^{k-1}] dx.
@@ -15,7 +16,9 @@ import {trapezoidWalk} from './trapezoid-walk.js';
  * log(D/Φ(x)) when r > ½, so both tails are integrals of positive terms with
  * full relative precision, down to the underflow threshold. D itself is
  * taken from whichever tails of Φ do not cancel, and for short intervals
- * (w < 1 away from the centre) by a 10-point Gauss-Legendre rule on φ.
+ * near the centre by a 10-point Gauss-Legendre rule on φ. The integral
+ * itself is the trapezoidal rule of trapezoid-walk.ts, started near the
+ * peak with a step from the integrand's width.
  */
 
 const SHORT_RULE = gaussLegendreRule(10);
@@ -43,8 +46,10 @@ export function normalRangeTail(w: number, k: number, upper: boolean): number {
   if (!(w > 0)) return upper ? 1 : 0;
   if (w === Infinity) return upper ? 0 : 1;
   const m = k - 1;
-  // Bonferroni: P(W > w) ≤ k(k-1) Φc(w/√2); zero there means zero here.
+  // Zero bounds mean zero tails: P(W > w) ≤ k(k-1) Φc(w/√2) (Bonferroni over
+  // pairs) and P(W ≤ w) ≤ k D_max^{k-1}, D_max = Φ(w/2) - Φ(-w/2).
   if (upper && k * m * normalSf(w / Math.SQRT2) === 0) return 0;
+  if (!upper && k * Math.pow(normalMass(w / 2, w), m) === 0) return 0;
   const integrand = upper
     ? (x: number): number => {
         const a = normalCdf(x);
