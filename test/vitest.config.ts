@@ -7,6 +7,7 @@ export default defineConfig({
     root: new URL('..', import.meta.url).pathname,
     include: ['test/**/*.test.ts'],
     globalSetup: ['test/global-setup.ts'],
+    setupFiles: ['test/setup-fast-check.ts'],
     exclude: ['test/bench/**', 'test/fuzz/**', 'node_modules/**'],
     reporters: ['default'],
     testTimeout: 30_000,

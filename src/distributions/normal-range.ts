@@ -32,7 +32,11 @@ const SHORT_RULE = gaussLegendreRule(10);
 export function normalMass(x: number, w: number): number {
   const lo = x - w;
   if (w < 1 && w * Math.min(Math.abs(x), Math.abs(lo)) < 1) {
-    return gaussLegendre(normalPdf, lo, x, SHORT_RULE);
+    // Centre and half-width from w itself: the rounding of x - w would be
+    // a relative error of eps·|x|/w in the interval's length.
+    const half = w / 2;
+    const mid = x - half;
+    return gaussLegendre((t) => normalPdf(mid + half * t), -1, 1, SHORT_RULE) * half;
   }
   if (lo >= 0) return normalSf(lo) - normalSf(x);
   if (x <= 0) return normalCdf(x) - normalCdf(lo);

@@ -29,16 +29,17 @@ import {trapezoidWalk} from './trapezoid-walk.js';
  * precision far into the tail (it falls like q^-ν for small ν).
  *
  * Measured (test/distributions/studentized-range.test.ts): against mpmath
- * 1.3.0 double integration at 20-200 digits, 14.5-16 digits for k = 2-10,
- * ν = 2-∞ (non-integer too) and tails down to 1e-175; against the exact
- * k = 2 case (Student’s t) at least 13.3 digits for ν from 0.5 to 1e15 and
- * tails down to 1e-275, the loss being the conditioning of the far tail;
- * 14 digits at q = 1e100, ν = 3 (p = 1.3e-299) against the q^-ν asymptote;
- * self-consistency (halved steps, tighter tolerances) at least 13.4 digits
- * over k = 2-1000, ν = 1-∞, q = 0.05-1e4. jstat, a port of R's ptukey,
- * is wrong in the upper tail for ν ≤ 5 (q(0.999; 10, 2): 58.85 against
- * 100.498). A call costs about 5,000 integrand evaluations (10,000 of Φ,
- * a few ms); the quantile about ten calls.
+ * 1.3.0 double integration at 20-200 digits, 14.5-16 digits for k = 2-20
+ * and ν = 1-∞ (non-integer too), tails down to 1e-175 included, and
+ * quantiles to 14.6 digits; against the exact k = 2 case (Student's t) at
+ * least 13.3 digits for ν from 0.5 to 1e15 and tails down to 1e-275, the
+ * loss being the conditioning of the far tail; 14 digits at q = 1e100,
+ * ν = 3 (p = 1.3e-299) against the q^-ν asymptote; self-consistency
+ * (halved steps, tighter tolerances) at least 13.4 digits over k = 2-1000,
+ * ν = 1-∞, q = 0.05-1e4. jstat, a port of R's ptukey, is wrong in the
+ * upper tail for ν ≤ 5 (q(0.999; 10, 2): 58.85 against 100.498). A call
+ * costs about 5,000 integrand evaluations (10,000 of Φ, a few ms); the
+ * quantile about ten calls.
  *
  * @example studentizedRangeSf(3.877, 3, 10) // 0.04998708875325442
  */

@@ -43,7 +43,9 @@ export function blockNumbers(block: ComputedBlock, pForDecision: number | undefi
   const {outcome, spec} = block;
   const level = `${Math.round(spec.confidence * 1000) / 10}%`;
   const estimate = outcome?.estimate;
-  const estimateDecimals = estimate ? decimalsForWidth(intervalWidth(estimate.value, estimate.ci)) : summaryDecimals;
+  // Ratios and coefficients keep two decimals at least: `OR = 3 [1, 15]` hides too much.
+  const minimum = estimate && estimate.units === undefined && block.question !== 'difference' ? 2 : 0;
+  const estimateDecimals = estimate ? Math.max(minimum, decimalsForWidth(intervalWidth(estimate.value, estimate.ci))) : summaryDecimals;
   const withUnits = (value: number, decimals = estimateDecimals) => unitText(formatFixed(value, decimals), block.units);
   if (!outcome) {
     const compact = Object.values(block.groups)
@@ -54,7 +56,9 @@ export function blockNumbers(block: ComputedBlock, pForDecision: number | undefi
   const df = outcome.df;
   const dfText = df === null ? '' : typeof df === 'number' ? `(${formatDf(df)})` : `(${df.map(formatDf).join(', ')})`;
   const statisticSymbol = statisticSymbols[outcome.statistic.name] ?? outcome.statistic.name;
-  const statistic = `${statisticSymbol}${dfText} = ${formatFixed(outcome.statistic.value, 2)}`;
+  // Counting statistics (U, V, S, k) are whole numbers and print as such.
+  const value = outcome.statistic.value;
+  const statistic = `${statisticSymbol}${dfText} = ${Number.isInteger(value) ? formatFixed(value, 0) : formatFixed(value, 2)}`;
   const testStatistics = `${statistic}, ${pClause(outcome.p, pForDecision === outcome.p ? spec.alpha : undefined)}`;
   const effect = outcome.effect ? effectText(outcome.effect, level) : '';
   return {
@@ -62,7 +66,7 @@ export function blockNumbers(block: ComputedBlock, pForDecision: number | undefi
     summaryDecimals,
     estimateDecimals,
     withUnits,
-    estimateCi: estimate ? wording.confidenceInterval(level, boundedScale(block) ? boundedInterval(estimate.ci, Math.max(2, estimateDecimals)) : formatInterval(estimate.ci, estimateDecimals)) : '',
+    estimateCi: estimate ? wording.confidenceInterval(percentOf(estimate.level), boundedScale(block) ? boundedInterval(estimate.ci, Math.max(2, estimateDecimals)) : formatInterval(estimate.ci, estimateDecimals)) : '',
     statistic,
     testStatistics,
     effect,
@@ -98,6 +102,11 @@ function effectText(effect: EffectSize, level: string): string {
 export function unitText(number: string, units: string | undefined): string {
   if (!units) return number;
   return units === '%' ? `${number}%` : `${number} ${units}`;
+}
+
+/** `95%`, `90%` (TOST's interval is at 1 − 2α, not at the block's confidence). */
+function percentOf(level: number): string {
+  return `${Math.round(level * 1000) / 10}%`;
 }
 
 /** Width of a two-sided interval; twice the finite half for one-sided ones. */

@@ -73,7 +73,8 @@ export function writeSentence(block: ComputedBlock, adjustment: Adjustment | und
 
 function equivalenceFinding(block: ComputedBlock, numbers: BlockNumbers, phrases: QuestionPhrases, alpha: string, equivalent: boolean): string {
   const margin = declared(block, block.spec.smallestEffect ?? 0);
-  const contrast = phrases.contrast.replace(/^difference in /, '');
+  const [first = '', second = ''] = block.names.samples;
+  const contrast = wording.equivalenceContrast(block.names.outcome, second, first);
   const template = equivalent ? wording.equivalent : wording.notEquivalent;
   return template(block.title, contrast, margin, alpha, numbers.estimateCi, numbers.testStatistics);
 }
@@ -120,7 +121,7 @@ function posthocStatement(block: ComputedBlock, numbers: BlockNumbers, alpha: st
   const differing = comparisons
     .filter((c) => c.p_adjusted <= block.spec.alpha)
     .map((c) => wording.posthocPair(
-      `${c.b} − ${c.a}`,
+      c.ci === null ? wording.meanRankContrast(c.b, c.a) : `${c.b} − ${c.a}`,
       c.ci === null ? formatFixed(c.estimate, 2) : numbers.withUnits(c.estimate),
       c.ci === null ? undefined : wording.confidenceInterval(`${Math.round(block.spec.confidence * 1000) / 10}%`, `[${formatFixed(c.ci[0], numbers.estimateDecimals)}, ${formatFixed(c.ci[1], numbers.estimateDecimals)}]`),
       pClause(c.p_adjusted, block.spec.alpha, 'adjusted p'),

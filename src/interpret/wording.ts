@@ -128,11 +128,13 @@ export const wording = {
   genericEstimate: (name: string, value: string) => `the ${name} was ${value}`,
   compatibleValues: (claim: string, ci: string) =>
     `This does not show that ${claim}: the ${ci} shows the values still compatible with the data.`,
+  equivalenceContrast: (outcome: string, second: string, first: string) => `mean ${outcome} of ${second} and ${first}`,
+  meanRankContrast: (b: string, a: string) => `${b} − ${a} (difference in mean rank)`,
   equivalent: (test: string, contrast: string, margin: string, alpha: string, ci: string, stats: string) =>
-    `${testSubject(test)} showed that the ${contrast} is equivalent within ±${margin} at the pre-declared α = ${alpha}: ` +
+    `${testSubject(test)} showed that the ${contrast} are equivalent within ±${margin} at the pre-declared α = ${alpha}: ` +
     `the ${ci} lies inside ±${margin} (${stats}).`,
   notEquivalent: (test: string, contrast: string, margin: string, alpha: string, ci: string, stats: string) =>
-    `${testSubject(test)} could not establish that the ${contrast} is equivalent within ±${margin} at the pre-declared ` +
+    `${testSubject(test)} could not establish that the ${contrast} are equivalent within ±${margin} at the pre-declared ` +
     `α = ${alpha}: the ${ci} extends beyond ±${margin} (${stats}). This does not show that a difference of ${margin} or more exists.`,
   posthocDiffering: (procedure: string, alpha: string, pairs: readonly string[]) =>
     `Pairs that differ at α = ${alpha} (${procedure}-adjusted): ${pairs.join('; ')}.`,

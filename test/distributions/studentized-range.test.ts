@@ -34,6 +34,24 @@ const MPMATH: readonly Case[] = [
   ['sf', 3.314, 3, Infinity, 0.050044140406110222291], // mpmath 1.3.0 at 20 digits
   ['sf', 4.474, 10, Infinity, 0.050013241593053213652], // mpmath 1.3.0 at 20 digits
   ['sf', 3.2, 4, 12.7, 0.15895257881436436445], // mpmath 1.3.0 at 20 digits (non-integer df)
+  ['sf', 5, 20, 60, 0.07853608560868466317], // mpmath 1.3.0 at 20 digits
+  ['sf', 4.5, 6, 12.7, 0.064217212557356839588], // mpmath 1.3.0 at 25 digits
+  ['sf', 4, 3, 100, 0.015470722723226106003], // mpmath 1.3.0 at 25 digits
+  ['cdf', 0.05, 5, 10, 4.2445524223704015417e-7], // mpmath 1.3.0 at 30 digits
+];
+
+/** Small df, where jstat's upper tail is wrong (shared/research/library-pitfalls.md). */
+const SMALL_DF: readonly Case[] = [
+  ['sf', 100.5, 10, 2, 0.00099996719860278027245], // mpmath 1.3.0 at 20 digits
+  ['sf', 10.88, 3, 3, 0.0093273046888603999785], // mpmath 1.3.0 at 20 digits
+  ['sf', 12, 10, 4, 0.010844278383983161415], // mpmath 1.3.0 at 20 digits
+  ['sf', 7.5, 8, 5, 0.029660879105094367055], // mpmath 1.3.0 at 25 digits
+  ['sf', 30, 5, 1, 0.061771810961221559103], // mpmath 1.3.0 at 20 digits
+  ['sf', 10, 3, 1, 0.13382638577257702971], // mpmath 1.3.0 at 20 digits
+  ['sf', 3, 3, 1, 0.41033295547761836124], // mpmath 1.3.0 at 20 digits
+  ['cdf', 0.3, 4, 1, 0.0051234390588545015295], // mpmath 1.3.0 at 20 digits
+  ['sf', 2, 2, 1.5, 0.32941568781058987453], // mpmath 1.3.0 at 20 digits
+  ['sf', 2.5, 2, 7, 0.12042857334609431848], // mpmath 1.3.0 at 20 digits
 ];
 
 function value([kind, q, k, df]: Case): number {
@@ -44,6 +62,19 @@ describe('studentizedRangeSf / studentizedRangeCdf', () => {
   it('agrees with mpmath double integration to 14 digits, tails included', () => {
     // Measured: at least 14.5 digits at every point (15+ at most).
     for (const c of MPMATH) expect(lre(value(c), c[4]), c.join(' ')).toBeGreaterThanOrEqual(14);
+  });
+
+  it('agrees with mpmath at small df (1 to 5), 14 digits', () => {
+    // Measured: at least 14.9 digits.
+    for (const c of SMALL_DF) expect(lre(value(c), c[4]), c.join(' ')).toBeGreaterThanOrEqual(14);
+  });
+
+  it('keeps digits in the far lower tail: P(Q ≤ q) ∝ q^(k-1) as q → 0', () => {
+    // The leading term of the lower tail is a power of q, so the ratio of two
+    // tiny cdfs is a power of 10 (the correction is O(q²) relative).
+    expect(lre(studentizedRangeCdf(1e-10, 3, 10) / studentizedRangeCdf(1e-50, 3, 10), 1e80)).toBeGreaterThanOrEqual(13);
+    const ratio = studentizedRangeCdf(1e-20, 5, Infinity) / studentizedRangeCdf(1e-60, 5, Infinity);
+    expect(lre(ratio, 1e160)).toBeGreaterThanOrEqual(13);
   });
 
   it('keeps digits in the far upper tail (q^-ν), down to 1e-299', () => {
@@ -136,6 +167,25 @@ describe('studentizedRangeQuantile', () => {
     for (const [k, df, q] of table) {
       const decimals = q > 10 ? 2 : 3;
       expect(studentizedRangeQuantile(0.95, k, df).toFixed(decimals), `${k} ${df}`).toBe(q.toFixed(decimals));
+    }
+  });
+
+  it('agrees with mpmath to 14 digits', () => {
+    // mpmath 1.3.0 at 22 digits: the double integral's P(Q > q) at stet's root,
+    // then one Newton step (density by finite difference; the step is below
+    // 1e-14 relative, so the density's own error does not matter). For p = 0.95
+    // the target is 1 - fl(0.95).
+    const mpmath: readonly [number, number, number, number][] = [
+      [0.95, 3, 10, 3.87677675001318097],
+      [0.95, 4, 16, 4.04609306062618394],
+      [0.999, 10, 2, 100.498350669890899],
+      [0.9, 6, 1.5, 10.8902213948836078],
+      [0.95, 3, Infinity, 3.31449315539812051],
+      [0.95, 10, Infinity, 4.47412422172590465],
+    ];
+    // Measured: at least 14.6 digits.
+    for (const [p, k, df, q] of mpmath) {
+      expect(lre(studentizedRangeQuantile(p, k, df), q), `${p} ${k} ${df}`).toBeGreaterThanOrEqual(14);
     }
   });
 

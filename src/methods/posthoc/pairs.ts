@@ -18,7 +18,10 @@ export function checkGroups(samples: readonly Sample[], confidence: number, mini
     throw new Error(`${title}: confidence must be in (0, 1), got ${String(confidence)}`);
   }
   if (samples.length < 2) {
-    throw new MethodError(`${title} compares two or more groups, but the data have ${samples.length}.`, 'Check the `by` column and any `where` filter.');
+    throw new MethodError(
+      `${title} compares two or more groups, but the data have ${samples.length}.`,
+      'Check the `by` column and any `where` filter.',
+    );
   }
   const small = samples.find((s) => s.values.length < minimum);
   if (small) {

@@ -64,6 +64,13 @@ describe('tukey: Tukey–Kramer all-pairs comparisons', () => {
       ['level_2', 'level_4', -4.307368390834279, -0.13263160916572359, 0.0351544790349676],
       ['level_3', 'level_4', -5.147368390834277, -0.9726316091657217, 0.0034505561857393063],
     ]);
+    // mpmath 1.3.0 at 22 digits: P(Q > q) by double integration at the exact q of
+    // the decimal data (MSE = 5323/4000), and q(0.95; 4, 16)·√(MSE/5) from the
+    // mpmath-checked quantile (test/distributions/studentized-range.test.ts)
+    expect(lre(find(nist, 'level_1', 'level_3').p_adjusted, 0.0022108219231380346302)).toBeGreaterThanOrEqual(14);
+    expect(lre(find(nist, 'level_1', 'level_2').p_adjusted, 0.022793380009273438732)).toBeGreaterThanOrEqual(14);
+    const {ci, estimate} = find(nist, 'level_1', 'level_2');
+    expect(lre(ci![1] - estimate, 2.08736839083427845)).toBeGreaterThanOrEqual(14);
     // exact: the printed level means are 5.34 and 8.56
     expect(lre(find(nist, 'level_1', 'level_3').estimate, 3.22)).toBeGreaterThanOrEqual(13);
   });
@@ -140,9 +147,12 @@ describe('tukey: Tukey–Kramer all-pairs comparisons', () => {
     const base = tukey(groups, 0.95);
     fc.assert(
       fc.property(fc.array(fc.nat(), {minLength: 15, maxLength: 15}), (keys) => {
-        const shuffled = groups.map((g, gi) =>
-          sample(g.label, [...g.values].map((v, i) => [v, keys[gi * 5 + i]!] as const).sort((x, y) => x[1] - y[1]).map(([v]) => v)),
-        );
+        const shuffle = (values: Float64Array, offset: number) =>
+          [...values]
+            .map((v, i) => [v, keys[offset + i]!] as const)
+            .sort((x, y) => x[1] - y[1])
+            .map(([v]) => v);
+        const shuffled = groups.map((g, gi) => sample(g.label, shuffle(g.values, gi * 5)));
         const result = tukey([shuffled[2]!, shuffled[0]!, shuffled[1]!], 0.95);
         for (const c of base) {
           const swapped = result.find((r) => r.a === c.b && r.b === c.a);
