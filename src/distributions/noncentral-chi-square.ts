@@ -1,6 +1,7 @@
 import {findRoot} from './find-root.js';
 import {incompleteGamma} from './incomplete-gamma.js';
 import {poissonTerm} from './poisson-term.js';
+import {CompensatedSum} from './compensated-sum.js';
 
 /**
  * The noncentral chi-square distribution χ²_ν(λ) with real df ν > 0 (finite)
@@ -37,27 +38,12 @@ import {poissonTerm} from './poisson-term.js';
 
 const TRUNCATION = 1e-17;
 
-/** Neumaier's compensated sum of positive terms. */
-class Sum {
-  private total = 0;
-  private compensation = 0;
-  add(term: number): void {
-    const next = this.total + term;
-    this.compensation +=
-      Math.abs(this.total) >= Math.abs(term) ? this.total - next + term : term - next + this.total;
-    this.total = next;
-  }
-  get value(): number {
-    return this.total + this.compensation;
-  }
-}
-
 /** Σ_j w_j P(k + j, y), downwards from where the remaining weights are negligible. */
 function lowerSeries(k: number, y: number, mu: number): number {
   let j = Math.ceil(mu + 10 * Math.sqrt(mu) + 40);
   let a = k + j;
   let p = incompleteGamma(a, y, false);
-  const sum = new Sum();
+  const sum = new CompensatedSum();
   sum.add(poissonTerm(j, mu) * p);
   while (j > 0) {
     j -= 1;
@@ -76,7 +62,7 @@ function upperSeries(k: number, y: number, mu: number): number {
   let j = Math.max(0, Math.floor(mu - 10 * Math.sqrt(mu) - 10));
   let a = k + j;
   let q = incompleteGamma(a, y, true);
-  const sum = new Sum();
+  const sum = new CompensatedSum();
   sum.add(poissonTerm(j, mu) * q);
   const limit = j + 100 + 20 * Math.ceil(mu + 10 * Math.sqrt(mu));
   while (j < limit) {

@@ -1,6 +1,7 @@
 import {findRoot} from './find-root.js';
 import {betaTerm, incompleteBeta} from './incomplete-beta.js';
 import {poissonTerm} from './poisson-term.js';
+import {CompensatedSum} from './compensated-sum.js';
 
 /**
  * The noncentral F distribution F' = (χ²_{ν₁}(λ)/ν₁) / (χ²_{ν₂}/ν₂) with
@@ -41,27 +42,12 @@ import {poissonTerm} from './poisson-term.js';
 /** Terms beyond this fraction of the running sum are dropped. */
 const TRUNCATION = 1e-17;
 
-/** Neumaier's compensated sum of positive terms. */
-class Sum {
-  private total = 0;
-  private compensation = 0;
-  add(term: number): void {
-    const next = this.total + term;
-    this.compensation +=
-      Math.abs(this.total) >= Math.abs(term) ? this.total - next + term : term - next + this.total;
-    this.total = next;
-  }
-  get value(): number {
-    return this.total + this.compensation;
-  }
-}
-
 /** Σ_j w_j I_x(a0 + j, b), downwards from where the remaining weights are negligible. */
 function lowerSeries(a0: number, b: number, x: number, y: number, mu: number): number {
   let j = Math.ceil(mu + 10 * Math.sqrt(mu) + 40);
   let a = a0 + j;
   let i = incompleteBeta(a, b, x, y, false);
-  const sum = new Sum();
+  const sum = new CompensatedSum();
   sum.add(poissonTerm(j, mu) * i);
   while (j > 0) {
     j -= 1;
@@ -80,7 +66,7 @@ function upperSeries(a0: number, b: number, x: number, y: number, mu: number): n
   let j = Math.max(0, Math.floor(mu - 10 * Math.sqrt(mu) - 10));
   let a = a0 + j;
   let ic = incompleteBeta(a, b, x, y, true);
-  const sum = new Sum();
+  const sum = new CompensatedSum();
   sum.add(poissonTerm(j, mu) * ic);
   const limit = j + 100 + 20 * Math.ceil(mu + 10 * Math.sqrt(mu));
   while (j < limit) {

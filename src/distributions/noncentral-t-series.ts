@@ -1,6 +1,7 @@
 import {betaTerm, incompleteBeta} from './incomplete-beta.js';
 import {normalCdf} from './normal.js';
 import {poissonTerm} from './poisson-term.js';
+import {CompensatedSum} from './compensated-sum.js';
 
 /**
  * The noncentral t distribution for t > 0 and ncp δ ≥ 0 as a Poisson
@@ -62,21 +63,6 @@ class SteppedTerm {
   }
 }
 
-/** Neumaier's compensated sum: the many small positive terms add without drift. */
-class Sum {
-  private total = 0;
-  private compensation = 0;
-  add(term: number): void {
-    const next = this.total + term;
-    this.compensation +=
-      Math.abs(this.total) >= Math.abs(term) ? this.total - next + term : term - next + this.total;
-    this.total = next;
-  }
-  get value(): number {
-    return this.total + this.compensation;
-  }
-}
-
 /** Σ_j w(s+j) I_x(s+j+½, b), run downwards from where the tail is negligible. */
 function lowerChain(s: number, x: number, y: number, b: number, lambda: number): number {
   let j = Math.max(0, Math.ceil(lambda - s + 10 * Math.sqrt(lambda) + 40));
@@ -97,7 +83,7 @@ function lowerChain(s: number, x: number, y: number, b: number, lambda: number):
   const w = new SteppedTerm(poissonTerm(s + j, lambda));
   const term = new SteppedTerm(betaTerm(a, b, x, y));
   let i = incompleteBeta(a, b, x, y, false, term.value);
-  const sum = new Sum();
+  const sum = new CompensatedSum();
   sum.add(w.value * i);
   while (j > 0) {
     const top = a;
@@ -132,7 +118,7 @@ function upperChain(s: number, x: number, y: number, b: number, lambda: number):
   const w = new SteppedTerm(poissonTerm(s + j, lambda));
   const term = new SteppedTerm(betaTerm(a, b, x, y));
   let ic = incompleteBeta(a, b, x, y, true, term.value);
-  const sum = new Sum();
+  const sum = new CompensatedSum();
   sum.add(w.value * ic);
   const limit = j + 100 + 20 * Math.ceil(lambda + 10 * Math.sqrt(lambda));
   while (j < limit) {
