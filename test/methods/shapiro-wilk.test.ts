@@ -11,7 +11,7 @@ describe('Shapiro–Wilk test (method)', () => {
     const reference = example<{data: {weights_lb: number[]}; published: {W: number}}>('shapiro_wilk--shapiro-wilk-1965-example1.json');
     const result = shapiroWilk.compute({kind: 'one-sample', sample: sample('all', reference.data.weights_lb)}, options());
     expect(result.statistic.name).toBe('W');
-    // Shapiro & Wilk 1965, p. 606 (secondary transcription): W = 0.79, p < 0.01.
+    // Shapiro & Wilk 1965, p. 606 (as quoted by a secondary source): W = 0.79, p < 0.01.
     expect(result.statistic.value.toFixed(2)).toBe(reference.published.W.toFixed(2));
     expect(result.p).toBeLessThan(0.01);
     // scipy 1.17.1: stats.shapiro(weights).pvalue = 0.006703814061898823 (its coefficients carry ~9 digits here).

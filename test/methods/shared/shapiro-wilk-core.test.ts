@@ -109,7 +109,7 @@ describe('shapiroWilk (AS R94)', () => {
   it('reproduces Shapiro & Wilk 1965, Example 1 (weights of 11 men)', () => {
     const reference = example<{data: {weights_lb: number[]}}>('shapiro_wilk--shapiro-wilk-1965-example1.json');
     const result = shapiroWilk(Float64Array.from(reference.data.weights_lb));
-    // Shapiro & Wilk 1965, Biometrika 52, p. 606 (secondary transcription): W = 0.79, p < 0.01.
+    // Shapiro & Wilk 1965, Biometrika 52, p. 606 (as quoted by a secondary source): W = 0.79, p < 0.01.
     expect(result.w.toFixed(2)).toBe('0.79');
     expect(result.p).toBeLessThan(0.01);
     // mpmath 1.3.0 at 40 digits, AS R94 formulas: W = 0.78881469483538743383, p = 0.0067038140565030117498.
