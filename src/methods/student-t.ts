@@ -1,8 +1,8 @@
-import {hedgesG} from './shared/hedges-g.js';
 import {pooledSd} from './shared/pooled-sd.js';
 import {summarize} from './shared/summarize.js';
 import {tInference} from './shared/t-inference.js';
 import {tSensitivity} from './shared/t-sensitivity.js';
+import {pooledHedgesG} from './shared/two-group-t.js';
 import type {MethodDefinition, TwoGroupDesign} from './types.js';
 
 /**
@@ -39,15 +39,7 @@ export const studentT: MethodDefinition<TwoGroupDesign> = {
         ci: inference.ci,
         level: options.confidence,
       },
-      effect: hedgesG({
-        d: (b.mean - a.mean) / sp,
-        t: inference.t,
-        df,
-        scale,
-        alternative: options.alternative,
-        confidence: options.confidence,
-        standardizer: 'pooled standard deviation',
-      }),
+      effect: pooledHedgesG(a, b, options.alternative, options.confidence),
       sensitivity: tSensitivity({
         ncpPerUnit: 1 / (sp * scale),
         df,

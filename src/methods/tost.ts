@@ -1,8 +1,7 @@
 import {studentTCdf, studentTQuantile, studentTSf} from '../distributions/student-t.js';
 import {MethodError} from './method-error.js';
-import {hedgesG} from './shared/hedges-g.js';
-import {pooledSd} from './shared/pooled-sd.js';
 import {summarize} from './shared/summarize.js';
+import {pooledHedgesG, welchStandardError} from './shared/two-group-t.js';
 import type {MethodDefinition, TwoGroupDesign} from './types.js';
 
 /**
@@ -47,11 +46,8 @@ export const tost: MethodDefinition<TwoGroupDesign> = {
     for (const [label, s] of [[first.label, a], [second.label, b]] as const) {
       if (s.n < 2) throw new MethodError(`the equivalence test needs at least two values per group; "${label}" has ${s.n}`, 'Check `where`, the levels and missing values in the data.');
     }
-    const va = a.sd ** 2 / a.n;
-    const vb = b.sd ** 2 / b.n;
-    const se = Math.sqrt(va + vb);
+    const {se, df} = welchStandardError(a, b);
     if (!(se > 0)) throw new MethodError('both groups are constant, so their difference has no standard error', 'Check the data: equivalence cannot be tested without variation.');
-    const df = (va + vb) ** 2 / (va ** 2 / (a.n - 1) + vb ** 2 / (b.n - 1));
     const difference = b.mean - a.mean;
     const tLower = (difference + delta) / se;
     const tUpper = (difference - delta) / se;
@@ -63,8 +59,6 @@ export const tost: MethodDefinition<TwoGroupDesign> = {
       const half = -studentTQuantile(tail, df) * se;
       return [difference - half, difference + half];
     };
-    const sp = pooledSd(a, b);
-    const scale = Math.sqrt(1 / a.n + 1 / b.n);
     return {
       statistic: {name: 't', value: binding.t},
       df,
@@ -75,15 +69,7 @@ export const tost: MethodDefinition<TwoGroupDesign> = {
         ci: interval(options.alpha),
         level: 1 - 2 * options.alpha,
       },
-      effect: hedgesG({
-        d: difference / sp,
-        t: difference / (sp * scale),
-        df: a.n + b.n - 2,
-        scale,
-        alternative: 'two-sided',
-        confidence: options.confidence,
-        standardizer: 'pooled standard deviation',
-      }),
+      effect: pooledHedgesG(a, b, 'two-sided', options.confidence),
       variant: 'two one-sided Welch t tests',
       details: {
         bounds: [-delta, delta],

@@ -1,8 +1,7 @@
-import {hedgesG} from './shared/hedges-g.js';
-import {pooledSd} from './shared/pooled-sd.js';
 import {summarize} from './shared/summarize.js';
 import {tInference} from './shared/t-inference.js';
 import {tSensitivity} from './shared/t-sensitivity.js';
+import {pooledHedgesG, welchStandardError} from './shared/two-group-t.js';
 import type {MethodDefinition, TwoGroupDesign} from './types.js';
 
 /**
@@ -21,10 +20,7 @@ export const welchT: MethodDefinition<TwoGroupDesign> = {
   compute({first, second}, options) {
     const a = summarize(first.values);
     const b = summarize(second.values);
-    const va = a.sd ** 2 / a.n;
-    const vb = b.sd ** 2 / b.n;
-    const se = Math.sqrt(va + vb);
-    const df = (va + vb) ** 2 / (va ** 2 / (a.n - 1) + vb ** 2 / (b.n - 1));
+    const {se, df} = welchStandardError(a, b);
     const difference = b.mean - a.mean;
     const inference = tInference({
       estimate: difference,
@@ -34,8 +30,6 @@ export const welchT: MethodDefinition<TwoGroupDesign> = {
       alternative: options.alternative,
       confidence: options.confidence,
     });
-    const sp = pooledSd(a, b);
-    const scale = Math.sqrt(1 / a.n + 1 / b.n);
     return {
       statistic: {name: 't', value: inference.t},
       df,
@@ -46,15 +40,7 @@ export const welchT: MethodDefinition<TwoGroupDesign> = {
         ci: inference.ci,
         level: options.confidence,
       },
-      effect: hedgesG({
-        d: difference / sp,
-        t: difference / (sp * scale),
-        df: a.n + b.n - 2,
-        scale,
-        alternative: options.alternative,
-        confidence: options.confidence,
-        standardizer: 'pooled standard deviation',
-      }),
+      effect: pooledHedgesG(a, b, options.alternative, options.confidence),
       sensitivity: tSensitivity({
         ncpPerUnit: 1 / se,
         df,
