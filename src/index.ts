@@ -10,3 +10,5 @@ export {buildReport} from './build-report.js';
 export type {BuildOptions, BuildResult} from './build-report.js';
 export type {BlockResult} from './compute/block-result.js';
 export {UserError} from './user-error.js';
+export {compileReport, outputFormats} from './compile-report.js';
+export type {CompileOptions, CompiledReport, OutputFormat} from './compile-report.js';

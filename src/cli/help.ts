@@ -1,23 +1,31 @@
-/** Text of `stet --help`. */
-export const helpText = `stet — compile a Markdown report whose statistics are declared, not typed
+import {commands} from './commands/index.js';
+
+/** Text of `stet --help`, listing every command from the registry. */
+export function helpText(): string {
+  const list = [...commands].map(([name, command]) => `  ${name.padEnd(8)} ${command.summary}`).join('\n');
+  const usages = [...commands.values()].map((command) => `  stet ${command.usage}`).join('\n');
+  return `stet — compile a Markdown report whose statistics are declared, not typed
 
 Usage:
-  stet build REPORT.md [--out DIR] [--allow-outside]
+${usages}
   stet --help
   stet --version
 
 Commands:
-  build    run every \`\`\`stet block of REPORT.md on its data and write
-           DIR/NAME.md, DIR/NAME.html, DIR/NAME.results.json and
-           DIR/charts/ID.svg (DIR defaults to out/ beside the report)
+${list}
+
+Outputs (DIR defaults to out/ beside the report): DIR/NAME.md, DIR/NAME.html,
+DIR/NAME.results.json and DIR/charts/ID.svg.
 
 Options:
   --out DIR          output folder
+  --to FORMATS       comma-separated: md, html, json, tex (default md,html,json)
   --allow-outside    allow data files outside the report's folder
   -h, --help         show this help
   -v, --version      show stet's version
 
-Exit codes: 0 built; 1 the report or its data has errors (nothing written);
+Exit codes: 0 success; 1 the report or its data has errors (nothing written);
 2 the command line is wrong.
 Set NO_COLOR to turn colour off; colour is only used on a terminal.
 `;
+}

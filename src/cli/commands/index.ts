@@ -1,0 +1,7 @@
+import type {Command} from '../command.js';
+import {buildCommand} from './build.js';
+
+/** Every `stet COMMAND`, in the order `--help` lists them. */
+export const commands: ReadonlyMap<string, Command> = new Map([
+  ['build', buildCommand],
+]);

@@ -1,0 +1,102 @@
+import {readFile} from 'node:fs/promises';
+import path from 'node:path';
+import remarkFrontmatter from 'remark-frontmatter';
+import remarkGfm from 'remark-gfm';
+import remarkParse from 'remark-parse';
+import {unified} from 'unified';
+import type {Root} from 'mdast';
+import {VFile} from 'vfile';
+import type {VFileMessage} from 'vfile-message';
+import remarkStet, {type StetData} from './remark-stet.js';
+import {htmlPage} from './render/html-page.js';
+import {resultsJson} from './render/results-json.js';
+import {toHtmlBody} from './render/to-html.js';
+import {toMarkdown} from './render/to-markdown.js';
+import {UserError} from './user-error.js';
+import {version} from './version.js';
+
+/** Output formats of `--to`; charts and CSV tables come with every build. */
+export const outputFormats = ['md', 'html', 'json', 'tex'] as const;
+export type OutputFormat = (typeof outputFormats)[number];
+export const defaultFormats: ReadonlySet<OutputFormat> = new Set(['md', 'html', 'json']);
+
+/** Options of `compileReport` and `buildReport`; every field optional. */
+export interface CompileOptions {
+  /** Output folder (default: `out/` beside the report). */
+  out?: string | undefined;
+  /** Allow data files outside the report's folder (default: false). */
+  allowOutside?: boolean | undefined;
+  /** Clock for the provenance footer (default: now). */
+  now?: (() => Date) | undefined;
+  /** Which documents to render (default: md, html, json). */
+  formats?: ReadonlySet<OutputFormat> | undefined;
+}
+
+/** A report compiled in memory: what a build would write, not yet written. */
+export interface CompiledReport {
+  readonly ok: boolean;
+  /** Errors and warnings, with places, in document order. */
+  readonly messages: readonly VFileMessage[];
+  /** Output files by path relative to `outDir` (empty when compilation failed). */
+  readonly files: ReadonlyMap<string, string>;
+  readonly outDir: string;
+  /** The report's absolute path and base name (NAME in NAME.html). */
+  readonly reportPath: string;
+  readonly name: string;
+  /** What the plugin computed; absent when it failed. */
+  readonly data?: StetData | undefined;
+}
+
+/**
+ * Compile a report in memory:
+ *
+ *   read → parse (remark) → remarkStet (resolve data, compute, interpret)
+ *        → render Markdown, HTML, JSON, charts
+ *
+ * Nothing is written; `buildReport` writes, `stet check` compares.
+ */
+export async function compileReport(reportPath: string, options: CompileOptions = {}): Promise<CompiledReport> {
+  const absolute = path.resolve(reportPath);
+  const outDir = path.resolve(options.out ?? path.join(path.dirname(absolute), 'out'));
+  const name = path.basename(absolute, path.extname(absolute));
+  const file = new VFile({path: reportPath, value: await readReport(absolute, reportPath)});
+  const formats = options.formats ?? defaultFormats;
+
+  // 1. Parse and run the plugin.
+  const parser = unified().use(remarkParse).use(remarkGfm).use(remarkFrontmatter, ['yaml']).use(remarkStet, {
+    allowOutside: options.allowOutside,
+  });
+  const tree = (await parser.run(parser.parse(file), file)) as Root;
+  const messages = [...file.messages].sort((a, b) => (a.line ?? 0) - (b.line ?? 0) || (a.column ?? 0) - (b.column ?? 0));
+  const data = file.data.stet;
+  const failed = {ok: false, messages, files: new Map<string, string>(), outDir, reportPath: absolute, name, data};
+  if (messages.some((message) => message.fatal) || !data) return failed;
+
+  // 2. Render every output in memory.
+  const title = data.settings.title ?? name;
+  const files = new Map<string, string>();
+  if (formats.has('md')) files.set(`${name}.md`, toMarkdown(tree, data.settings.passthrough));
+  if (formats.has('html')) {
+    const body = await toHtmlBody(tree, data.charts);
+    const builtAt = (options.now ?? (() => new Date()))().toISOString();
+    files.set(`${name}.html`, await htmlPage({title, body, datasets: data.datasets, version, builtAt}));
+  }
+  if (formats.has('json')) files.set(`${name}.results.json`, resultsJson(data, path.basename(absolute), version));
+  for (const [id, chart] of data.charts) files.set(`charts/${id}.svg`, chart.svg);
+
+  return {...failed, ok: true, files};
+}
+
+async function readReport(absolute: string, written: string): Promise<string> {
+  try {
+    return await readFile(absolute, 'utf8');
+  } catch (error) {
+    const code = (error as NodeJS.ErrnoException).code;
+    if (code !== 'ENOENT' && code !== 'EISDIR') throw error;
+    throw new UserError(code === 'ENOENT' ? 'report not found' : 'report is a folder, not a file', {
+      ruleId: 'report-missing',
+      file: written,
+      hint: 'Give the path of a Markdown report, e.g. `stet build report.md`.',
+    });
+  }
+}
