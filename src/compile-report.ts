@@ -30,6 +30,10 @@ export interface CompileOptions {
   now?: (() => Date) | undefined;
   /** Which documents to render (default: md, html, json). */
   formats?: ReadonlySet<OutputFormat> | undefined;
+  /** An HTML template file with `<!--stet:NAME-->` slots (default: stet's own). */
+  template?: string | undefined;
+  /** Keep the author's raw HTML unsanitised in the HTML output (default: false). */
+  allowHtml?: boolean | undefined;
 }
 
 /** A report compiled in memory: what a build would write, not yet written. */
@@ -77,9 +81,10 @@ export async function compileReport(reportPath: string, options: CompileOptions 
   const files = new Map<string, string>();
   if (formats.has('md')) files.set(`${name}.md`, toMarkdown(tree, data.settings.passthrough));
   if (formats.has('html')) {
-    const body = await toHtmlBody(tree, data.charts);
+    const body = await toHtmlBody(tree, data.charts, {allowHtml: options.allowHtml});
     const builtAt = (options.now ?? (() => new Date()))().toISOString();
-    files.set(`${name}.html`, await htmlPage({title, body, datasets: data.datasets, version, builtAt}));
+    const page = {title, body, front: data.settings.passthrough, datasets: data.datasets, version, builtAt, templatePath: options.template};
+    files.set(`${name}.html`, await htmlPage(page));
   }
   if (formats.has('json')) files.set(`${name}.results.json`, resultsJson(data, path.basename(absolute), version));
   for (const [id, chart] of data.charts) files.set(`charts/${id}.svg`, chart.svg);

@@ -9,6 +9,8 @@ import type {Dataset} from './data/column.js';
 import {reportError} from './document/report-error.js';
 import {interpretBlock, type InterpretedBlock} from './interpret/result-record.js';
 import {blockNodes} from './render/block-nodes.js';
+import {resolveCrossReferences} from './render/cross-references.js';
+import {createFloatCounter, type FloatNumbers} from './render/float-numbers.js';
 import {resolveReferences} from './render/resolve-references.js';
 import {createDatasetLoader} from './resolve/load-datasets.js';
 import {selectRows} from './resolve/select-rows.js';
@@ -32,6 +34,8 @@ export interface StetData {
   readonly datasets: ReadonlyMap<string, Dataset>;
   /** Chart SVG by block id; the document refers to `charts/ID.svg`. */
   readonly charts: ReadonlyMap<string, BlockChart>;
+  /** Figure and table numbers by block id, in document order. */
+  readonly floats: FloatNumbers;
 }
 
 declare module 'vfile' {
@@ -45,7 +49,8 @@ declare module 'vfile' {
  * with their results.
  *
  *   front matter → block specs → datasets → rows → compute → adjust
- *   families → interpret → charts → replace blocks → resolve {{references}}
+ *   families → interpret → charts → replace blocks (numbering figures and
+ *   tables) → resolve {{fig:/tab: cross-references}} and {{references}}
  *
  * Authors' mistakes become fatal messages on the file, with positions; the
  * tree is left as far as it got.
@@ -113,20 +118,23 @@ export default function remarkStet(options: RemarkStetOptions = {}) {
       }
     }
 
-    // 9. Replace each block by its output (failed blocks stay as written).
+    // 9. Replace each block by its output (failed blocks stay as written),
+    //    numbering figures and tables in document order.
+    const floats = createFloatCounter();
     visit(tree, 'code', (node: Code, index, parent) => {
       const block = blocks.get(specs.get(node)?.id ?? '');
       if (!parent || index === undefined || !block || computed.get(node) !== block.computed) return;
-      const nodes = blockNodes(node, block, charts.get(block.computed.spec.id));
+      const nodes = blockNodes(node, block, charts.get(block.computed.spec.id), floats);
       parent.children.splice(index, 1, ...nodes);
       return [SKIP, index + nodes.length];
     });
     for (const spec of specs.values()) if (!blocks.has(spec.id)) failed.add(spec.id);
 
-    // 10. Inline references.
+    // 10. Inline references: cross-references to floats, then values.
+    resolveCrossReferences(tree, floats, failed, report);
     resolveReferences(tree, blocks, failed, report);
 
-    file.data.stet = {settings, blocks, datasets: await loader.loaded(), charts};
+    file.data.stet = {settings, blocks, datasets: await loader.loaded(), charts, floats};
   };
 }
 

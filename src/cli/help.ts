@@ -20,6 +20,8 @@ DIR/NAME.results.json and DIR/charts/ID.svg.
 Options:
   --out DIR          output folder
   --to FORMATS       comma-separated: md, html, json, tex (default md,html,json)
+  --template FILE    HTML template with <!--stet:body--> and <!--stet:caution--> slots
+  --allow-html       keep the report's raw HTML as written (default: sanitised)
   --allow-outside    allow data files outside the report's folder
   -h, --help         show this help
   -v, --version      show stet's version

@@ -1,13 +1,16 @@
-import type {Code, RootContent} from 'mdast';
+import type {Code, Paragraph, RootContent} from 'mdast';
 import type {InterpretedBlock} from '../interpret/result-record.js';
+import type {FloatCounter} from './float-numbers.js';
 import {resultsTables} from './results-tables.js';
 
 /**
- * What replaces a ```stet block in the document: its sentence, its tables
- * and its chart (as an image of `charts/ID.svg`), as the block's `show`
- * asks. Every node keeps the block's position so messages point at it.
+ * What replaces a ```stet block in the document, as the block's `show`
+ * asks: its sentence; its results tables under a numbered caption (tables
+ * are captioned above); its chart (as an image of `charts/ID.svg`) with a
+ * numbered caption below. Every node keeps the block's position so
+ * messages point at it.
  */
-export function blockNodes(code: Code, block: InterpretedBlock, chart: {alt: string} | undefined): RootContent[] {
+export function blockNodes(code: Code, block: InterpretedBlock, chart: {alt: string} | undefined, floats: FloatCounter): RootContent[] {
   const {spec} = block.computed;
   const position = code.position;
   const nodes: RootContent[] = [];
@@ -15,7 +18,9 @@ export function blockNodes(code: Code, block: InterpretedBlock, chart: {alt: str
     nodes.push({type: 'paragraph', position, children: [{type: 'text', value: block.result.sentence, position}]});
   }
   if (spec.show.has('table')) {
-    for (const table of resultsTables(block)) nodes.push({...table, position});
+    const tables = resultsTables(block);
+    if (tables.length > 0) nodes.push(caption(block, 'Table', floats.table(spec.id), 'tab', position));
+    for (const table of tables) nodes.push({...table, position});
   }
   if (chart && spec.show.has('chart')) {
     nodes.push({
@@ -23,14 +28,26 @@ export function blockNodes(code: Code, block: InterpretedBlock, chart: {alt: str
       position,
       children: [{type: 'image', url: `charts/${spec.id}.svg`, alt: chart.alt, title: null, position}],
     });
-  }
-  if (spec.caption && (spec.show.has('table') || (chart && spec.show.has('chart')))) {
-    nodes.push({
-      type: 'paragraph',
-      position,
-      data: {hProperties: {className: ['stet-caption']}},
-      children: [{type: 'emphasis', children: [{type: 'text', value: spec.caption}]}],
-    });
+    nodes.push(caption(block, 'Figure', floats.figure(spec.id), 'fig', position));
   }
   return nodes;
+}
+
+/** "Table 2. caption" — the block's own caption, or one from its method and columns. */
+function caption(block: InterpretedBlock, word: string, number: number, kind: 'tab' | 'fig', position: Code['position']): Paragraph {
+  const {spec, title, names} = block.computed;
+  const text = spec.caption ?? `${capitalise(title)}: ${names.outcome}${names.by ? ` by ${names.by}` : ''}.`;
+  return {
+    type: 'paragraph',
+    position,
+    data: {hProperties: {className: ['stet-caption', `stet-${kind}-caption`], id: `${kind}-${spec.id}${kind === 'fig' ? '-caption' : ''}`}},
+    children: [
+      {type: 'strong', children: [{type: 'text', value: `${word} ${number}.`}]},
+      {type: 'text', value: ` ${text}`},
+    ],
+  };
+}
+
+function capitalise(text: string): string {
+  return text.charAt(0).toUpperCase() + text.slice(1);
 }

@@ -2,8 +2,9 @@ import type {Root, Text} from 'mdast';
 import {visit} from 'unist-util-visit';
 import type {InterpretedBlock} from '../interpret/result-record.js';
 import {didYouMean} from '../spec/suggest.js';
-import {UserError, type Place} from '../user-error.js';
+import {UserError} from '../user-error.js';
 import {formatField} from './format-field.js';
+import {placeInText} from './place-in-text.js';
 
 /** `{{id}}` or `{{id.path.to.field}}` in prose. */
 export const referencePattern = /\{\{\s*([a-z][a-z0-9_-]*)((?:\.[A-Za-z0-9_]+)*)\s*\}\}/g;
@@ -46,16 +47,4 @@ export function resolveReferences(
       return text;
     });
   });
-}
-
-/** Report position of a character of a text node (exact unless escapes precede it). */
-function placeInText(node: Text, offset: number): Place | undefined {
-  const start = node.position?.start;
-  if (!start) return undefined;
-  const before = node.value.slice(0, offset);
-  const lastNewline = before.lastIndexOf('\n');
-  const lines = before.split('\n').length - 1;
-  return lines === 0
-    ? {line: start.line, column: start.column + offset}
-    : {line: start.line + lines, column: offset - lastNewline};
 }

@@ -7,19 +7,27 @@ import {printMessages} from '../print-messages.js';
 import {oneReport} from '../one-report.js';
 
 export const buildCommand: Command = {
-  usage: 'build REPORT.md [--out DIR] [--to md,html,json,tex] [--allow-outside]',
+  usage: 'build REPORT.md [--out DIR] [--to md,html,json,tex] [--template FILE] [--allow-html] [--allow-outside]',
   summary: 'run every ```stet block on its data and write the outputs',
   async run({args, io, paint}) {
     const {values, positionals} = parseArgs({
       args: [...args],
       allowPositionals: true,
-      options: {out: {type: 'string'}, to: {type: 'string'}, 'allow-outside': {type: 'boolean'}},
+      options: {
+        out: {type: 'string'},
+        to: {type: 'string'},
+        template: {type: 'string'},
+        'allow-html': {type: 'boolean'},
+        'allow-outside': {type: 'boolean'},
+      },
     });
     const report = oneReport('build', positionals);
     const started = process.hrtime.bigint();
     const result = await buildReport(report, {
       out: values.out,
       allowOutside: values['allow-outside'],
+      template: values.template,
+      allowHtml: values['allow-html'],
       formats: values.to === undefined ? defaultFormats : parseFormats(values.to),
     });
     if (!printMessages(result.messages, io, paint)) {
