@@ -40,12 +40,13 @@ export async function htmlPage(input: PageInput): Promise<string> {
     input.templatePath ? readTemplate(input.templatePath) : readFile(new URL('report.html', defaultTemplates), 'utf8'),
     readFile(new URL('report.css', defaultTemplates), 'utf8'),
   ]);
+  const {header, body} = titleBlock(input);
   const slots: Record<string, string> = {
     version: escapeHtml(input.version),
     title: escapeHtml(input.title),
     style: css.trimEnd(),
-    header: titleBlock(input),
-    body: input.body,
+    header,
+    body,
     caution: escapeHtml(caution),
     provenance: provenance(input),
   };
@@ -73,17 +74,20 @@ async function readTemplate(templatePath: string): Promise<string> {
 }
 
 /**
- * Author and date from the front matter, and the title when the document
- * does not open with its own top-level heading.
+ * The title block: the title (unless the document opens with its own
+ * top-level heading), then subtitle, author and date from the front matter.
+ * When the body opens with an `<h1>`, those lines go right under it.
  */
-function titleBlock(input: PageInput): string {
-  const lines: string[] = [];
-  if (!/^\s*<h1[\s>]/.test(input.body)) lines.push(`<p class="stet-title">${escapeHtml(input.title)}</p>`);
+function titleBlock(input: PageInput): {header: string; body: string} {
+  const opening = /^\s*<h1[\s>][^]*?<\/h1>\n?/.exec(input.body);
+  const lines = opening ? [] : [`<p class="stet-title">${escapeHtml(input.title)}</p>`];
   for (const key of ['subtitle', 'author', 'date']) {
     const value = input.front?.[key];
     if (typeof value === 'string' || typeof value === 'number') lines.push(`<p class="stet-${key}">${escapeHtml(String(value))}</p>`);
   }
-  return lines.length ? `<header class="stet-title-block">\n${lines.join('\n')}\n</header>` : '';
+  const block = lines.length ? `<header class="stet-title-block">\n${lines.join('\n')}\n</header>\n` : '';
+  if (!opening) return {header: block, body: input.body};
+  return {header: '', body: `${opening[0]}${block}${input.body.slice(opening[0].length)}`};
 }
 
 function provenance(input: PageInput): string {

@@ -73,9 +73,10 @@ describe('the page template', () => {
     const front = '---\ntitle: Mix <trial>\nauthor: Site laboratory & partners\ndate: 2026-11-30\n---\n\n';
     const {html: page} = await html(`${front}Intro.\n\n${block('first')}`);
     expect(page).toContain('<header class="stet-title-block">\n<p class="stet-title">Mix &lt;trial&gt;</p>\n<p class="stet-author">Site laboratory &amp; partners</p>\n<p class="stet-date">2026-11-30</p>\n</header>');
-    // A document that opens with its own heading is not given a second title.
+    // A document that opens with its own heading keeps it, with the author and date under it.
     const {html: headed} = await html(`${front}# Mix trial\n\n${block('first')}`);
     expect(headed).not.toContain('class="stet-title"');
+    expect(headed).toContain('<h1>Mix trial</h1>\n<header class="stet-title-block">\n<p class="stet-author">');
   });
 
   it('uses a user template given with --template, and refuses one without the caution', async () => {
