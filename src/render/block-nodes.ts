@@ -1,5 +1,6 @@
 import type {Code, RootContent} from 'mdast';
 import type {InterpretedBlock} from '../interpret/result-record.js';
+import {wording} from '../interpret/wording.js';
 import {resultsTables} from './results-tables.js';
 
 /**
@@ -16,6 +17,8 @@ export function blockNodes(code: Code, block: InterpretedBlock, chart: {alt: str
   }
   if (spec.show.has('table')) {
     for (const table of resultsTables(block)) nodes.push({...table, position});
+    const plan = block.result.plan;
+    if (plan) nodes.push({type: 'paragraph', position, data: {hProperties: {className: ['stet-plan']}}, children: [{type: 'text', value: wording.planNote(plan)}]});
   }
   if (chart && spec.show.has('chart')) {
     nodes.push({
