@@ -1,5 +1,6 @@
 import type {StetData} from '../remark-stet.js';
 import {columnsUsed} from './columns-used.js';
+import {missingCells} from './missing-cells.js';
 
 /**
  * `NAME.results.json` (contract §6): unrounded numbers. JSON has no
@@ -20,7 +21,10 @@ export function resultsJson(data: StetData, source: string, version: string): st
       columns_used: [...d.columns.keys()].filter((name) => used.get(d.name)?.has(name)),
     }]),
   );
-  const blocks = Object.fromEntries([...data.blocks].map(([id, block]) => [id, block.result]));
+  const blocks = Object.fromEntries([...data.blocks].map(([id, block]) => {
+    const dataset = data.datasets.get(block.computed.spec.data);
+    return [id, dataset ? {...block.result, missing_cells: missingCells(block.computed.spec, dataset)} : block.result];
+  }));
   const document = {stet: {version}, source, alpha: data.settings.alpha, confidence: data.settings.confidence, adjust: data.settings.adjust, datasets, blocks};
   return `${JSON.stringify(document, (_key, value: unknown) => (typeof value === 'number' && !Number.isFinite(value) ? null : value), 2)}\n`;
 }
