@@ -9,6 +9,7 @@ import {version} from '../version.js';
 import {explainInputs} from './explain-inputs.js';
 import {compareOutputs} from './compare-outputs.js';
 import {hashTemplates, manifestName, readManifest, type BuildManifest} from './manifest.js';
+import {outputHash} from './output-hash.js';
 
 /** Options of `checkReport`; every field optional. */
 export interface CheckOptions {
@@ -94,7 +95,8 @@ async function unchanged(reportPath: string, outDir: string, manifest: BuildMani
     if (plan !== block.disclosure.plan || count !== block.disclosure.specifications) return false;
   }
   for (const [file, hash] of Object.entries(manifest.outputs)) {
-    if ((await hashFile(path.join(outDir, file))) !== hash) return false;
+    const content = await readFile(path.join(outDir, file), 'utf8').catch(() => undefined);
+    if (content === undefined || outputHash(content) !== hash) return false;
   }
   return true;
 }

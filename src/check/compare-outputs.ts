@@ -1,15 +1,8 @@
 import {readFile} from 'node:fs/promises';
 import path from 'node:path';
-import {sha256} from '../spec/spec-fingerprint.js';
 import type {Finding} from './check-report.js';
 import type {BuildManifest} from './manifest.js';
-
-/** The build time in the HTML provenance footer: the one part that differs between identical builds. */
-const builtAt = /<time datetime="[^"]*">[^<]*<\/time>/g;
-
-function withoutBuildTime(content: string): string {
-  return content.replace(builtAt, '<time></time>');
-}
+import {outputHash, withoutBuildTime} from './output-hash.js';
 
 /**
  * Each output file against what a build would write now: missing, edited by
@@ -26,7 +19,7 @@ export async function compareOutputs(outDir: string, expected: ReadonlyMap<strin
       continue;
     }
     const recorded = manifest?.outputs[file];
-    if (recorded !== undefined && sha256(onDisk) !== recorded) finding(file, 'edited by hand since the last build (a build will overwrite it)');
+    if (recorded !== undefined && outputHash(onDisk) !== recorded) finding(file, 'edited by hand since the last build (a build will overwrite it)');
     else if (withoutBuildTime(onDisk) !== withoutBuildTime(content)) finding(file, 'out of date');
   }
   for (const file of Object.keys(manifest?.outputs ?? {}).sort()) {

@@ -4,6 +4,7 @@ import type {CompiledReport, OutputFormat} from '../compile-report.js';
 import type {Disclosure} from '../interpret/disclosure.js';
 import {blockSpecHash, canonicalJson, planHash, sha256, specificationHash} from '../spec/spec-fingerprint.js';
 import {version} from '../version.js';
+import {outputHash} from './output-hash.js';
 import {proseHash} from './prose-hash.js';
 
 /**
@@ -22,7 +23,7 @@ export interface BuildManifest {
   /** Data files by dataset name; `file` as written, relative to the report. */
   readonly datasets: Readonly<Record<string, {readonly file: string; readonly sha256: string}>>;
   readonly blocks: Readonly<Record<string, ManifestBlock>>;
-  /** sha256 of every file written, by path relative to the output folder. */
+  /** `outputHash` (sha256 without the HTML build time) of every file written, by path relative to the output folder. */
   readonly outputs: Readonly<Record<string, string>>;
 }
 
@@ -67,7 +68,7 @@ export async function createManifest(compiled: CompiledReport, formats: Readonly
     templates: formats.has('html') ? await hashTemplates() : {},
     datasets: Object.fromEntries([...data.datasets].map(([name, d]) => [name, {file: d.file, sha256: d.sha256}])),
     blocks,
-    outputs: Object.fromEntries([...compiled.files].map(([file, content]) => [file, sha256(content)])),
+    outputs: Object.fromEntries([...compiled.files].map(([file, content]) => [file, outputHash(content)])),
   };
   return `${canonicalJson(manifest, 2)}\n`;
 }

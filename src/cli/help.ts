@@ -21,11 +21,13 @@ Options:
   --out DIR          output folder
   --to FORMATS       comma-separated: md, html, json, tex (default md,html,json)
   --allow-outside    allow data files outside the report's folder
+  --show             lock: print the locked plan and the report's differences
+  --force            lock: replace a lock the report differs from
   -h, --help         show this help
   -v, --version      show stet's version
 
-Exit codes: 0 success; 1 the report or its data has errors (nothing written);
-2 the command line is wrong.
+Exit codes: 0 success; 1 the report or its data has errors (nothing written),
+or check found the output stale; 2 the command line is wrong.
 Set NO_COLOR to turn colour off; colour is only used on a terminal.
 `;
 }

@@ -65,11 +65,14 @@ function parseEntry(line: string): LedgerEntry | undefined {
   return record as unknown as LedgerEntry;
 }
 
+/** A block's lines in the ledger, oldest first (for the appendix). */
+export function entriesOf(ledger: Ledger, report: string, block: string): LedgerEntry[] {
+  return ledger.entries.filter((entry) => entry.report === report && entry.block === block);
+}
+
 /** Distinct specifications of a block: those in the ledger and the current one. */
 export function countSpecifications(ledger: Ledger, report: string, block: string, currentSpec: string): number {
-  const specs = new Set([currentSpec]);
-  for (const entry of ledger.entries) if (entry.report === report && entry.block === block) specs.add(entry.spec);
-  return specs.size;
+  return new Set([currentSpec, ...entriesOf(ledger, report, block).map((entry) => entry.spec)]).size;
 }
 
 /**
