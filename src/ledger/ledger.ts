@@ -31,7 +31,11 @@ export function ledgerPath(reportDir: string): string {
   return path.join(reportDir, '.stet', 'ledger.jsonl');
 }
 
-/** Read the ledger; a missing file is an empty ledger, a corrupt line a warning. */
+/**
+ * Read the ledger; a missing file is an empty ledger, a corrupt line a
+ * warning. Two builds at once may both append the same key: harmless, as
+ * everything read from the ledger counts distinct specifications.
+ */
 export async function readLedger(reportDir: string): Promise<Ledger> {
   let text: string;
   try {
