@@ -82,6 +82,22 @@ describe('checkReport', () => {
     expect(before).toMatch(/<time datetime="[^"]+">/);
   });
 
+  it('names a lock that changes a block\'s label, and a new stet version that changes no output', async () => {
+    const {report, out} = await built();
+    const manifestFile = path.join(out, '.stet-manifest.json');
+    const manifest = JSON.parse(await readFile(manifestFile, 'utf8')) as {stet: string};
+    await writeFile(manifestFile, JSON.stringify({...manifest, stet: '0.0.0-old'}));
+    const upgraded = await checkReport(report);
+    expect(upgraded).toMatchObject({fresh: true, compiled: true});
+    expect(lines(upgraded)).toEqual([expect.stringMatching(/^stet: version changed \(0\.0\.0-old → \d/)]);
+
+    await writeFile(path.join(path.dirname(report), 'stet.lock'), JSON.stringify({'stet-lock': 1, report: 'report.md', blocks: {}}));
+    const locked = await checkReport(report);
+    expect(locked.fresh).toBe(false);
+    expect(lines(locked)).toContain('block rigs: plan unlocked → exploratory (stet.lock changed)');
+    expect(lines(locked)).toContain('report.results.json: out of date');
+  });
+
   it('does not write the ledger nor any output', async () => {
     const {report, out} = await built();
     const ledger = path.join(path.dirname(report), '.stet/ledger.jsonl');
