@@ -1,5 +1,8 @@
+import path from 'node:path';
 import type {VFileMessage} from 'vfile-message';
-import {compileReport, type CompileOptions} from './compile-report.js';
+import {createManifest, manifestName} from './check/manifest.js';
+import {compileReport, defaultFormats, type CompileOptions} from './compile-report.js';
+import {recordEvaluations} from './ledger/record-evaluations.js';
 import {writeAtomically} from './write/write-atomically.js';
 
 export type BuildOptions = CompileOptions;
@@ -8,18 +11,22 @@ export interface BuildResult {
   readonly ok: boolean;
   /** Errors and warnings, with places, in document order. */
   readonly messages: readonly VFileMessage[];
-  /** Absolute paths written (empty when the build failed). */
+  /** Absolute paths written (empty when the build failed); the build record not included. */
   readonly written: readonly string[];
   readonly outDir: string;
 }
 
 /**
- * Build a report: compile it in memory, then write every output atomically.
- * A build with any error writes nothing.
+ * Build a report: compile it in memory, then write every output atomically
+ * with the build record `stet check` reads, then append what was evaluated
+ * to the ledger. A build with any error writes nothing.
  */
 export async function buildReport(reportPath: string, options: BuildOptions = {}): Promise<BuildResult> {
   const compiled = await compileReport(reportPath, options);
   const {ok, messages, outDir} = compiled;
   if (!ok) return {ok, messages, written: [], outDir};
-  return {ok, messages, written: await writeAtomically(outDir, compiled.files), outDir};
+  const manifest = await createManifest(compiled, options.formats ?? defaultFormats, options.allowOutside ?? false);
+  const written = await writeAtomically(outDir, new Map([...compiled.files, [manifestName, manifest]]));
+  await recordEvaluations(compiled, (options.now ?? (() => new Date()))());
+  return {ok, messages, written: written.filter((file) => path.basename(file) !== manifestName), outDir};
 }

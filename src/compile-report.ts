@@ -7,6 +7,8 @@ import {unified} from 'unified';
 import type {Root} from 'mdast';
 import {VFile} from 'vfile';
 import type {VFileMessage} from 'vfile-message';
+import {reportError} from './document/report-error.js';
+import {readPlanHistory, type PlanHistory} from './lock/plan-history.js';
 import remarkStet, {type StetData} from './remark-stet.js';
 import {htmlPage} from './render/html-page.js';
 import {resultsJson} from './render/results-json.js';
@@ -49,6 +51,8 @@ export interface CompiledReport {
   readonly name: string;
   /** What the plugin computed; absent when it failed. */
   readonly data?: StetData | undefined;
+  /** The lock and ledger the sentences disclosed; absent when they could not be read. */
+  readonly history?: PlanHistory | undefined;
 }
 
 /**
@@ -65,15 +69,18 @@ export async function compileReport(reportPath: string, options: CompileOptions 
   const name = path.basename(absolute, path.extname(absolute));
   const file = new VFile({path: reportPath, value: await readReport(absolute, reportPath)});
   const formats = options.formats ?? defaultFormats;
+  const history = await readPlanHistory(absolute).catch((error: unknown) => void reportError(file, error));
+  for (const warning of history?.ledger.warnings ?? []) file.message(warning, {ruleId: 'ledger-line', source: 'stet'});
 
   // 1. Parse and run the plugin.
   const parser = unified().use(remarkParse).use(remarkGfm).use(remarkFrontmatter, ['yaml']).use(remarkStet, {
     allowOutside: options.allowOutside,
+    disclose: history?.disclose,
   });
   const tree = (await parser.run(parser.parse(file), file)) as Root;
   const messages = [...file.messages].sort((a, b) => (a.line ?? 0) - (b.line ?? 0) || (a.column ?? 0) - (b.column ?? 0));
   const data = file.data.stet;
-  const failed = {ok: false, messages, files: new Map<string, string>(), outDir, reportPath: absolute, name, data};
+  const failed = {ok: false, messages, files: new Map<string, string>(), outDir, reportPath: absolute, name, data, history};
   if (messages.some((message) => message.fatal) || !data) return failed;
 
   // 2. Render every output in memory.

@@ -7,6 +7,7 @@ import {adjustFamilies} from './compute/adjust-families.js';
 import {computeBlock, type ComputedBlock} from './compute/compute-block.js';
 import type {Dataset} from './data/column.js';
 import {reportError} from './document/report-error.js';
+import type {Disclosure} from './interpret/disclosure.js';
 import {interpretBlock, type InterpretedBlock} from './interpret/result-record.js';
 import {blockNodes} from './render/block-nodes.js';
 import {resolveCrossReferences} from './render/cross-references.js';
@@ -25,6 +26,8 @@ export interface RemarkStetOptions {
   allowOutside?: boolean | undefined;
   /** Render charts (default: true). */
   charts?: boolean | undefined;
+  /** The block's plan label and count of specifications, from `stet.lock` and the ledger (default: none). */
+  disclose?: ((spec: BlockSpec, settings: DocumentSettings) => Disclosure | undefined) | undefined;
 }
 
 /** What the plugin leaves on `file.data.stet` for writers. */
@@ -36,6 +39,8 @@ export interface StetData {
   readonly charts: ReadonlyMap<string, BlockChart>;
   /** Figure and table numbers by block id, in document order. */
   readonly floats: FloatNumbers;
+  /** Every valid block as declared (before `auto` is resolved), by id. */
+  readonly specs: ReadonlyMap<string, BlockSpec>;
 }
 
 declare module 'vfile' {
@@ -105,8 +110,10 @@ export default function remarkStet(options: RemarkStetOptions = {}) {
     // 6–7. Adjust within families, then decide and word each result.
     const adjustments = adjustFamilies([...computed.values()], settings.adjust);
     const blocks = new Map<string, InterpretedBlock>();
+    const declared = new Map([...specs.values()].map((spec) => [spec.id, spec]));
     for (const block of computed.values()) {
-      blocks.set(block.spec.id, interpretBlock(block, adjustments.get(block.spec.id)));
+      const disclosure = options.disclose?.(declared.get(block.spec.id) ?? block.spec, settings);
+      blocks.set(block.spec.id, interpretBlock(block, adjustments.get(block.spec.id), disclosure));
     }
 
     // 8. Charts.
@@ -134,7 +141,7 @@ export default function remarkStet(options: RemarkStetOptions = {}) {
     resolveCrossReferences(tree, floats, failed, report);
     resolveReferences(tree, blocks, failed, report);
 
-    file.data.stet = {settings, blocks, datasets: await loader.loaded(), charts, floats};
+    file.data.stet = {settings, blocks, datasets: await loader.loaded(), charts, floats, specs: declared};
   };
 }
 

@@ -23,11 +23,13 @@ Options:
   --template FILE    HTML template with <!--stet:body--> and <!--stet:caution--> slots
   --allow-html       keep the report's raw HTML as written (default: sanitised)
   --allow-outside    allow data files outside the report's folder
+  --show             lock: print the locked plan and the report's differences
+  --force            lock: replace a lock the report differs from
   -h, --help         show this help
   -v, --version      show stet's version
 
-Exit codes: 0 success; 1 the report or its data has errors (nothing written);
-2 the command line is wrong.
+Exit codes: 0 success; 1 the report or its data has errors (nothing written),
+or check found the output stale; 2 the command line is wrong.
 Set NO_COLOR to turn colour off; colour is only used on a terminal.
 `;
 }

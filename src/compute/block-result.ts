@@ -50,4 +50,8 @@ export interface BlockResult {
   readonly sentence: string;
   readonly warnings: readonly string[];
   readonly rows: RowAccount;
+  /** Distinct specifications of this block the ledger has seen, this one included. */
+  readonly specifications_evaluated?: number;
+  /** Against `stet.lock`; absent when the report has no lock. */
+  readonly plan?: 'confirmatory' | 'exploratory';
 }

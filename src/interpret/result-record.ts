@@ -1,6 +1,7 @@
 import type {BlockResult} from '../compute/block-result.js';
 import type {ComputedBlock} from '../compute/compute-block.js';
 import {blockNumbers} from './block-numbers.js';
+import type {Disclosure} from './disclosure.js';
 import {writeSentence, type Adjustment} from './sentence.js';
 
 /**
@@ -14,9 +15,9 @@ export interface InterpretedBlock {
   readonly computed: ComputedBlock;
 }
 
-export function interpretBlock(block: ComputedBlock, adjustment: Adjustment | undefined): InterpretedBlock {
+export function interpretBlock(block: ComputedBlock, adjustment: Adjustment | undefined, disclosure?: Disclosure): InterpretedBlock {
   const {spec, outcome} = block;
-  const sentence = writeSentence(block, adjustment);
+  const sentence = writeSentence(block, adjustment, disclosure);
   const compact = blockNumbers(block, adjustment?.pAdjusted ?? outcome?.p).compact;
   const n = block.rows.used;
   const base = {
@@ -30,6 +31,8 @@ export function interpretBlock(block: ComputedBlock, adjustment: Adjustment | un
     sentence,
     warnings: outcome?.warnings ?? [],
     rows: block.rows,
+    ...(disclosure ? {specifications_evaluated: disclosure.specifications} : {}),
+    ...(disclosure?.plan ? {plan: disclosure.plan} : {}),
   };
   if (!outcome) return {result: base, compact, computed: block};
   const decisive = adjustment?.pAdjusted ?? outcome.p;

@@ -4,6 +4,7 @@ import {blockNumbers, boundedScale, type BlockNumbers} from './block-numbers.js'
 import {formatFixed, formatPercent, formatUnitBounded, pClause} from './format-number.js';
 import {declared, meanMethods, questionPhrases, type QuestionPhrases} from './question-phrases.js';
 import {adjustNames, effectNames, wording, type Direction} from './wording.js';
+import {disclosurePhrases, type Disclosure} from './disclosure.js';
 
 /**
  * The interpretive sentence of a block (contract §7). Which statements
@@ -32,7 +33,7 @@ const rankAlternatives: Record<string, string> = {
   'welch-anova': 'kruskal-wallis',
 };
 
-export function writeSentence(block: ComputedBlock, adjustment: Adjustment | undefined): string {
+export function writeSentence(block: ComputedBlock, adjustment: Adjustment | undefined, disclosure?: Disclosure): string {
   const {outcome, spec} = block;
   const p = adjustment?.pAdjusted ?? outcome?.p;
   const numbers = blockNumbers(block, p);
@@ -68,6 +69,7 @@ export function writeSentence(block: ComputedBlock, adjustment: Adjustment | und
   const spearman = outcome.details?.['spearman'] as {rho: number; p: number} | undefined;
   if (spearman) parts.push(wording.spearmanBeside(formatUnitBounded(spearman.rho, 2), pClause(spearman.p)));
   if (block.autoReason) parts.push(wording.autoChoice(block.autoReason));
+  parts.push(...disclosurePhrases(disclosure));
   return parts.join(' ');
 }
 

@@ -175,6 +175,14 @@ export const wording = {
     `${capitalize(outcome)} by ${by}: ${parts.join('; ')}.`,
 
   confidenceInterval: (level: string, interval: string) => `${level} CI ${interval}`,
+
+  // Plan lock and ledger (stet lock, .stet/ledger.jsonl).
+  planConfirmatory: 'Confirmatory: this comparison is as declared in the locked analysis plan.',
+  planExploratory: 'Exploratory: this comparison is not in the locked analysis plan, or changed since the plan was locked.',
+  specificationsEvaluated: (count: number) =>
+    `${count} specifications of this comparison were evaluated while this report was written; see the appendix.`,
+  planNote: (plan: 'confirmatory' | 'exploratory') =>
+    plan === 'confirmatory' ? 'Plan: confirmatory (as locked in stet.lock).' : 'Plan: exploratory (not in stet.lock, or changed since it was locked).',
 } as const;
 
 export type Direction = 'higher' | 'lower' | 'none';

@@ -1,6 +1,7 @@
 import type {Code, Paragraph, RootContent} from 'mdast';
 import type {InterpretedBlock} from '../interpret/result-record.js';
 import type {FloatCounter} from './float-numbers.js';
+import {wording} from '../interpret/wording.js';
 import {resultsTables} from './results-tables.js';
 
 /**
@@ -21,6 +22,8 @@ export function blockNodes(code: Code, block: InterpretedBlock, chart: {alt: str
     const tables = resultsTables(block);
     if (tables.length > 0) nodes.push(caption(block, 'Table', floats.table(spec.id), 'tab', position));
     for (const table of tables) nodes.push({...table, position});
+    const plan = block.result.plan;
+    if (plan) nodes.push({type: 'paragraph', position, data: {hProperties: {className: ['stet-plan']}}, children: [{type: 'text', value: wording.planNote(plan)}]});
   }
   if (chart && spec.show.has('chart')) {
     nodes.push({
