@@ -8,8 +8,10 @@ import type {Root} from 'mdast';
 import {VFile} from 'vfile';
 import type {VFileMessage} from 'vfile-message';
 import remarkStet, {type StetData} from './remark-stet.js';
+import {appendixFiles} from './render/appendix-files.js';
 import {htmlPage} from './render/html-page.js';
 import {resultsJson} from './render/results-json.js';
+import {tableFiles} from './render/table-files.js';
 import {toHtmlBody} from './render/to-html.js';
 import {toMarkdown} from './render/to-markdown.js';
 import {UserError} from './user-error.js';
@@ -75,14 +77,16 @@ export async function compileReport(reportPath: string, options: CompileOptions 
   // 2. Render every output in memory.
   const title = data.settings.title ?? name;
   const files = new Map<string, string>();
+  const builtAt = (options.now ?? (() => new Date()))().toISOString();
   if (formats.has('md')) files.set(`${name}.md`, toMarkdown(tree, data.settings.passthrough));
   if (formats.has('html')) {
     const body = await toHtmlBody(tree, data.charts);
-    const builtAt = (options.now ?? (() => new Date()))().toISOString();
     files.set(`${name}.html`, await htmlPage({title, body, datasets: data.datasets, version, builtAt}));
   }
   if (formats.has('json')) files.set(`${name}.results.json`, resultsJson(data, path.basename(absolute), version));
   for (const [id, chart] of data.charts) files.set(`charts/${id}.svg`, chart.svg);
+  for (const [file, text] of tableFiles(data, formats, name, path.basename(absolute))) files.set(file, text);
+  for (const [file, text] of await appendixFiles({data, formats, name, title, version, builtAt})) files.set(file, text);
 
   return {...failed, ok: true, files};
 }

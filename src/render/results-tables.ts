@@ -10,10 +10,21 @@ import {capitalize, effectNames} from '../interpret/wording.js';
  * post-hoc comparisons when there are any.
  */
 export function resultsTables(block: InterpretedBlock): Table[] {
+  return resultsTablesByKind(block).map(({table}) => table);
+}
+
+export type ResultsTableKind = 'descriptives' | 'counts' | 'test' | 'posthoc';
+
+/** The same tables, each with its kind (the appendix captions them). */
+export function resultsTablesByKind(block: InterpretedBlock): {kind: ResultsTableKind; table: Table}[] {
   const numbers = blockNumbers(block.computed, block.result.p_adjusted ?? block.result.p);
-  return [descriptivesTable(block, numbers), countsTable(block), testTable(block, numbers), posthocTable(block, numbers)].filter(
-    (t): t is Table => t !== undefined,
-  );
+  const tables = {
+    descriptives: descriptivesTable(block, numbers),
+    counts: countsTable(block),
+    test: testTable(block, numbers),
+    posthoc: posthocTable(block, numbers),
+  };
+  return Object.entries(tables).flatMap(([kind, table]) => (table ? [{kind: kind as ResultsTableKind, table}] : []));
 }
 
 function descriptivesTable(block: InterpretedBlock, numbers: BlockNumbers): Table | undefined {
