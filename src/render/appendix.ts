@@ -37,7 +37,9 @@ function blockSection(
 ): RootContent[] {
   const {result, computed} = block;
   const {spec} = computed;
-  const nodes: RootContent[] = [heading(2, words.blockHeading(number, id, result.title)), definitions(block)];
+  // The heading's id lets the report and other documents link to `NAME.appendix.html#appendix-ID`.
+  const title: RootContent = {...heading(2, words.blockHeading(number, id, result.title)), data: {hProperties: {id: `appendix-${id}`}}};
+  const nodes: RootContent[] = [title, definitions(block)];
   nodes.push(paragraph([strong(`${words.labels.sentence}.`), text(` ${result.sentence}`)]));
   const tables: {kind: string; table: Table}[] = [...resultsTablesByKind(block), ...extraTables(block)];
   for (const {kind, table} of tables) {

@@ -9,7 +9,8 @@ import type {BlockResult} from '../compute/block-result.js';
  *
  * - `section`: group · test · estimate · effect · sensitivity · posthoc ·
  *   assumption · rows · detail (method-specific numbers: ANOVA table,
- *   coefficients, observed counts, …, `quantity` holding their JSON path).
+ *   coefficients, observed counts, …, `quantity` holding their JSON path;
+ *   a coefficient's term in `item`, its path without the index).
  * - `value` is always a number, unrounded: JavaScript's shortest text that
  *   reads back to the same double (the JSON's number exactly); `Inf`/`-Inf`
  *   for the open bound of a one-sided interval; empty where JSON has null.
@@ -64,7 +65,13 @@ export function tableCsv(id: string, result: BlockResult): string {
   }
   for (const [quantity, value] of Object.entries(result.rows)) add('rows', '', '', '', quantity, value);
   for (const [key, value] of Object.entries(result)) {
-    if (!covered.has(key)) numericLeaves(value, key, (quantity, v) => add('detail', '', '', '', quantity, v));
+    if (covered.has(key)) continue;
+    if (Array.isArray(value) && value.every(isTerm)) {
+      // Regression coefficients: one row per term and number, named by the term.
+      for (const row of value) numericLeaves(row, key, (quantity, v) => add('detail', row.term, '', '', quantity, v));
+    } else {
+      numericLeaves(value, key, (quantity, v) => add('detail', '', '', '', quantity, v));
+    }
   }
   const lines = [csvColumns, ...rows.map(([section, item, level, other, quantity, value]) => [id, section, item, level, other, quantity, csvNumber(value)])];
   return lines.map((line) => line.map(csvField).join(',')).join('\r\n') + '\r\n';
@@ -80,6 +87,10 @@ function interval(
   add(section, name, '', '', 'value', value);
   add(section, name, '', '', 'ci_lower', ci?.[0] ?? null);
   add(section, name, '', '', 'ci_upper', ci?.[1] ?? null);
+}
+
+function isTerm(value: unknown): value is {term: string} {
+  return value !== null && typeof value === 'object' && typeof (value as {term?: unknown}).term === 'string';
 }
 
 /** Every number under `value`, with its dotted JSON path (`anova_table.between.ss`). */

@@ -20,7 +20,7 @@ describe('the appendix', () => {
     const ids = Object.keys(json.blocks);
     const headings = [...md.matchAll(/^## A(\d+)\. ([a-z0-9_-]+): /gm)].map((m) => [Number(m[1]), m[2]]);
     expect(headings).toEqual(ids.map((id, i) => [i + 1, id]));
-    for (const id of ids) expect(html).toContain(`<h2>A${ids.indexOf(id) + 1}. ${id}: `);
+    for (const id of ids) expect(html).toContain(`<h2 id="appendix-${id}">A${ids.indexOf(id) + 1}. ${id}: `);
   });
 
   it('numbers tables A1, A2, … and figures A1, A2, … without gaps', () => {

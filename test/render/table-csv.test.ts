@@ -66,7 +66,9 @@ describe('tables/ID.csv', () => {
     const first = anova.posthoc[0];
     expect(value('mixes', {section: 'posthoc', level: first.a, other_level: first.b, quantity: 'p_adjusted'})).toBe(first.p_adjusted);
     expect(value('mixes', {section: 'detail', quantity: 'anova_table.within.ss'})).toBe(anova.anova_table.within.ss);
-    expect(value('water', {section: 'detail', quantity: 'coefficients.1.se'})).toBe(json.blocks['water'].coefficients[1].se);
+    const slope = json.blocks['water'].coefficients[1];
+    expect(value('water', {section: 'detail', item: slope.term, quantity: 'coefficients.se'})).toBe(slope.se);
+    expect(value('water', {section: 'detail', item: slope.term, quantity: 'coefficients.ci.1'})).toBe(slope.ci[1]);
     expect(rows('mixes').find((row) => row.quantity === 'p_adjusted' && row.section === 'test')!.value).toBe('');
   });
 
