@@ -15,6 +15,6 @@ export function tableFiles(data: StetData, formats: ReadonlySet<OutputFormat>, n
     files.push([`tables/${id}.csv`, tableCsv(id, block.result)]);
     if (formats.has('tex')) files.push([`tables/${id}.tex`, tableTex(block, source)]);
   }
-  if (formats.has('tex')) files.push([`${name}.values.tex`, valuesTex(data.blocks, source)]);
+  if (formats.has('tex')) files.push([`${name}.values.tex`, valuesTex(data.blocks, source, name)]);
   return files;
 }

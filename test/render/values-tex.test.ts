@@ -55,6 +55,7 @@ describe('NAME.values.tex', () => {
 The mixes differ (\stetval{lean-rich}{}). In short, \stetval{lean-rich}{p};
 lean mixes averaged \stetval{lean-rich}{groups.lean.mean} MPa.
 \stetval{lean-rich}{sentence}
+Unknown: \stetval{lean_rich}{no_such_field}.
 \section{Mixes: \stetval{lean-rich}{p}}
 Table~\ref{tab:lean-rich} and Table~\ref{tab:mixes}.
 ${[...report.data!.blocks.keys()].map((id) => `\\input{tables/${id}.tex}`).join('\n')}
@@ -65,6 +66,7 @@ ${[...report.data!.blocks.keys()].map((id) => `\\input{tables/${id}.tex}`).join(
     console.log(`pdflatex compiled the chapter in ${run.ms.toFixed(0)} ms`);
     expect(run.status, run.log.slice(-3000)).toBe(0);
     expect(latexProblems(run.log)).toEqual([]);
+    expect(run.log).toContain('stet: no value lean_rich.no_such_field');
     expect((await stat(path.join(dir, 'chapter.pdf'))).size).toBeGreaterThan(1000);
     const p = formatField(report.data!.blocks.get('lean-rich')!, ['p'])!;
     // The typeset text, from the PDF's uncompressed content streams.
