@@ -10,8 +10,10 @@ import type {VFileMessage} from 'vfile-message';
 import {reportError} from './document/report-error.js';
 import {readPlanHistory, type PlanHistory} from './lock/plan-history.js';
 import remarkStet, {type StetData} from './remark-stet.js';
+import {appendixFiles} from './render/appendix-files.js';
 import {htmlPage} from './render/html-page.js';
 import {resultsJson} from './render/results-json.js';
+import {tableFiles} from './render/table-files.js';
 import {toHtmlBody} from './render/to-html.js';
 import {toMarkdown} from './render/to-markdown.js';
 import {UserError} from './user-error.js';
@@ -86,15 +88,17 @@ export async function compileReport(reportPath: string, options: CompileOptions 
   // 2. Render every output in memory.
   const title = data.settings.title ?? name;
   const files = new Map<string, string>();
+  const builtAt = (options.now ?? (() => new Date()))().toISOString();
   if (formats.has('md')) files.set(`${name}.md`, toMarkdown(tree, data.settings.passthrough));
   if (formats.has('html')) {
     const body = await toHtmlBody(tree, data.charts, {allowHtml: options.allowHtml});
-    const builtAt = (options.now ?? (() => new Date()))().toISOString();
     const page = {title, body, front: data.settings.passthrough, datasets: data.datasets, version, builtAt, templatePath: options.template};
     files.set(`${name}.html`, await htmlPage(page));
   }
   if (formats.has('json')) files.set(`${name}.results.json`, resultsJson(data, path.basename(absolute), version));
   for (const [id, chart] of data.charts) files.set(`charts/${id}.svg`, chart.svg);
+  for (const [file, text] of tableFiles(data, formats, name, path.basename(absolute))) files.set(file, text);
+  for (const [file, text] of await appendixFiles({data, formats, name, title, version, builtAt, templatePath: options.template})) files.set(file, text);
 
   return {...failed, ok: true, files};
 }

@@ -15,7 +15,9 @@ Commands:
 ${list}
 
 Outputs (DIR defaults to out/ beside the report): DIR/NAME.md, DIR/NAME.html,
-DIR/NAME.results.json and DIR/charts/ID.svg.
+DIR/NAME.results.json, DIR/NAME.appendix.md, DIR/NAME.appendix.html,
+DIR/charts/ID.svg and DIR/tables/ID.csv; with tex also DIR/tables/ID.tex and
+DIR/NAME.values.tex.
 
 Options:
   --out DIR          output folder

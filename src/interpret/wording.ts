@@ -252,3 +252,51 @@ export const statisticSymbols: Record<string, string> = {
   'X-squared': 'χ²',
   chisq: 'χ²',
 };
+
+/** Headings and labels of the appendix (`NAME.appendix.md`/`.html`). */
+export const appendixWords = {
+  title: (title: string) => `Appendix: ${title}`,
+  intro: (report: string) =>
+    `Every analysis block of ${report} in full: the method and why it was chosen, the rows used and left out, ` +
+    'every descriptive statistic, assumption check and comparison, and every warning.',
+  blockHeading: (number: number, id: string, title: string) => `A${number}. ${id}: ${title}`,
+  table: (number: number) => `Table A${number}.`,
+  figure: (number: number) => `Figure A${number}.`,
+  tableKinds: {
+    descriptives: 'Descriptive statistics',
+    counts: 'Observed counts',
+    test: 'Test',
+    posthoc: 'Post-hoc comparisons',
+    assumptions: 'Assumption checks',
+    coefficients: 'Regression coefficients',
+    anova: 'Analysis of variance',
+  } as Record<string, string>,
+  of: (what: string, id: string) => `${what} of block ${id}.`,
+  labels: {
+    method: 'Method',
+    variant: 'Computation',
+    auto: 'Chosen by auto',
+    alternative: 'Alternative',
+    alpha: 'Significance level',
+    confidence: 'Confidence level',
+    data: 'Data',
+    where: 'Rows kept by',
+    rows: 'Rows',
+    family: 'Multiple testing',
+    smallestEffect: 'Smallest effect of interest',
+    sensitivity: 'Sensitivity',
+    warnings: 'Warnings',
+    sentence: 'Result',
+  },
+  rows: (used: number, missing: number, filter: number, levels: number) =>
+    `${used} used; ${missing} left out for a missing value; ${filter} left out by the filter; ${levels} in levels not analysed`,
+  noWhere: 'all rows (no filter)',
+  family: (name: string, adjust: string, size: number) => `family ${name}, ${adjust}-adjusted across ${size} tests`,
+  noFamily: 'not in a family; p not adjusted',
+  power: (power: string, mde: string) => `power at the smallest effect of interest ${power}; smallest effect detectable with 80% power ${mde}`,
+  mde: (mde: string) => `smallest effect detectable with 80% power ${mde}`,
+  noWarnings: 'none',
+  assumptionHeader: ['Check', 'Group', 'Statistic', 'p'],
+  coefficientHeader: ['Term', 'Estimate', 'SE', 't', 'p', 'CI'],
+  anovaHeader: ['Source', 'SS', 'df', 'MS'],
+};

@@ -1,5 +1,5 @@
 import type {PhrasingContent, Table, TableRow} from 'mdast';
-import {blockNumbers, type BlockNumbers} from '../interpret/block-numbers.js';
+import {blockNumbers, boundedScale, type BlockNumbers} from '../interpret/block-numbers.js';
 import {formatFixed, formatP, formatUnitBounded} from '../interpret/format-number.js';
 import type {InterpretedBlock} from '../interpret/result-record.js';
 import {capitalize, effectNames} from '../interpret/wording.js';
@@ -10,10 +10,21 @@ import {capitalize, effectNames} from '../interpret/wording.js';
  * post-hoc comparisons when there are any.
  */
 export function resultsTables(block: InterpretedBlock): Table[] {
+  return resultsTablesByKind(block).map(({table}) => table);
+}
+
+export type ResultsTableKind = 'descriptives' | 'counts' | 'test' | 'posthoc';
+
+/** The same tables, each with its kind (the appendix captions them). */
+export function resultsTablesByKind(block: InterpretedBlock): {kind: ResultsTableKind; table: Table}[] {
   const numbers = blockNumbers(block.computed, block.result.p_adjusted ?? block.result.p);
-  return [descriptivesTable(block, numbers), countsTable(block), testTable(block, numbers), posthocTable(block, numbers)].filter(
-    (t): t is Table => t !== undefined,
-  );
+  const tables = {
+    descriptives: descriptivesTable(block, numbers),
+    counts: countsTable(block),
+    test: testTable(block, numbers),
+    posthoc: posthocTable(block, numbers),
+  };
+  return Object.entries(tables).flatMap(([kind, table]) => (table ? [{kind: kind as ResultsTableKind, table}] : []));
 }
 
 function descriptivesTable(block: InterpretedBlock, numbers: BlockNumbers): Table | undefined {
@@ -66,11 +77,18 @@ function testTable(block: InterpretedBlock, numbers: BlockNumbers): Table | unde
   ];
   if (adjusted) columns.push(['Adjusted p', p(result.p_adjusted!)]);
   columns.push([`Decision (α = ${alpha})`, result.decision === 'reject' ? 'reject H₀' : 'fail to reject H₀']);
-  if (result.estimate) {
-    columns.push([`${capitalize(result.estimate.name)} [${level}]`, `${numbers.withUnits(result.estimate.value)} ${numbers.estimateCi.replace(/^.*CI /, '')}`]);
+  const {estimate, effect} = result;
+  if (estimate) {
+    // Correlations and proportions without a leading zero, like their interval.
+    const value = boundedScale(computed) ? formatUnitBounded(estimate.value, Math.max(2, numbers.estimateDecimals)) : numbers.withUnits(estimate.value);
+    columns.push([`${capitalize(estimate.name)} [${level}]`, `${value} ${numbers.estimateCi.replace(/^.*CI /, '')}`]);
   }
-  if (result.effect && numbers.effect) {
-    columns.push([`${capitalize(effectNames[result.effect.name] ?? result.effect.name)} [${level}]`, numbers.effect.replace(/^[^=]*= /, '').replace(/, [\d.]+% CI /, ' ')]);
+  // An effect that is the estimate itself (r, an odds ratio) gets no second column.
+  const repeatsEstimate = estimate && effect && effect.value === estimate.value && effect.ci?.[0] === estimate.ci[0] && effect.ci?.[1] === estimate.ci[1];
+  if (effect && numbers.effect && !repeatsEstimate) {
+    const name = columnName(effectNames[effect.name] ?? effect.name);
+    const hasCi = numbers.effect.includes('% CI ');
+    columns.push([hasCi ? `${name} [${level}]` : name, numbers.effect.replace(/^[^=]*= /, '').replace(/, [\d.]+% CI /, ' ')]);
   }
   return table(columns.map(([header]) => header), [columns.map(([, cell]) => cell)]);
 }
@@ -80,13 +98,24 @@ function posthocTable(block: InterpretedBlock, numbers: BlockNumbers): Table | u
   if (!comparisons?.length) return undefined;
   const level = `${Math.round(block.computed.spec.confidence * 1000) / 10}% CI`;
   const d = numbers.estimateDecimals;
+  // Dunn's procedure compares mean ranks and has no interval.
+  const ranks = comparisons.every((c) => c.ci === null);
+  const header = ranks ? ['Comparison', 'Difference in mean ranks', 'Adjusted p'] : ['Comparison', 'Difference', `Simultaneous ${level}`, 'Adjusted p'];
   return table(
-    ['Comparison', 'Difference', `Simultaneous ${level}`, 'Adjusted p'],
+    header,
     comparisons.map((c) => {
       const {relation, text} = formatP(c.p_adjusted, block.result.alpha);
-      return [`${c.b} − ${c.a}`, formatFixed(c.estimate, d), c.ci ? `[${formatFixed(c.ci[0], d)}, ${formatFixed(c.ci[1], d)}]` : '—', relation === '=' ? text : `${relation} ${text}`];
+      const p = relation === '=' ? text : `${relation} ${text}`;
+      const interval = c.ci ? `[${formatFixed(c.ci[0], d)}, ${formatFixed(c.ci[1], d)}]` : '—';
+      return ranks ? [`${c.b} − ${c.a}`, formatFixed(c.estimate, d), p] : [`${c.b} − ${c.a}`, formatFixed(c.estimate, d), interval, p];
     }),
   );
+}
+
+/** A name as a column header: `the odds ratio` → `Odds ratio`; symbols (`r`, `η²`) as they are. */
+function columnName(name: string): string {
+  const bare = name.replace(/^the /, '');
+  return bare.length > 3 ? capitalize(bare) : bare;
 }
 
 function table(header: readonly string[], rows: readonly (readonly string[])[]): Table {
