@@ -287,7 +287,15 @@ export const appendixWords = {
     sensitivity: 'Sensitivity',
     warnings: 'Warnings',
     sentence: 'Result',
+    plan: 'Plan',
+    specifications: 'Specifications evaluated',
   },
+  plan: (plan: 'confirmatory' | 'exploratory') =>
+    plan === 'confirmatory' ? 'confirmatory: as recorded in stet.lock' : 'exploratory: not in stet.lock, or changed since it was locked',
+  specifications: (count: number) =>
+    count === 1
+      ? '1: this is the only specification of this block evaluated while the report was written (.stet/ledger.jsonl)'
+      : `${count} distinct specifications of this block were evaluated while the report was written (.stet/ledger.jsonl); only this one is reported`,
   rows: (used: number, missing: number, filter: number, levels: number) =>
     `${used} used; ${missing} left out for a missing value; ${filter} left out by the filter; ${levels} in levels not analysed`,
   noWhere: 'all rows (no filter)',

@@ -75,6 +75,8 @@ function definitions(block: InterpretedBlock): BlockContent {
     const family = result.family;
     items.push([l.family, [text(family ? words.family(family.name, adjustNames[family.adjust] ?? family.adjust, family.size) : words.noFamily)]]);
   }
+  if (result.plan) items.push([l.plan, [text(words.plan(result.plan))]]);
+  if (result.specifications_evaluated !== undefined) items.push([l.specifications, [text(words.specifications(result.specifications_evaluated))]]);
   if (result.smallest_effect != null) items.push([l.smallestEffect, [text(blockNumbers(computed, result.p).withUnits(result.smallest_effect))]]);
   if (result.sensitivity) {
     const mde = formatField(block, ['sensitivity', 'min_detectable_effect_80']) ?? '';

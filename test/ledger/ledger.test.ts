@@ -39,6 +39,9 @@ describe('the ledger across builds', () => {
     expect(second.blocks['rigs']!.sentence).toContain('2 specifications of this comparison were evaluated while this report was written; see the appendix.');
     expect(second.blocks['nominal']!.specifications_evaluated).toBe(1);
     expect(second.blocks['nominal']!.sentence).not.toMatch(/specifications/);
+    // The appendix the sentence points to gives the count.
+    const appendix = await readFile(path.join(path.dirname(report), 'out/report.appendix.md'), 'utf8');
+    expect(appendix).toContain('**Specifications evaluated:** 2 distinct specifications of this block were evaluated');
 
     // Back to the first alpha: still two distinct specifications, no new line.
     await edit(report, '\nalpha: 0.10', '');
