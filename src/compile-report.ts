@@ -7,6 +7,7 @@ import {unified} from 'unified';
 import type {Root} from 'mdast';
 import {VFile} from 'vfile';
 import type {VFileMessage} from 'vfile-message';
+import type {BlockCache} from './cache/block-cache.js';
 import remarkStet, {type StetData} from './remark-stet.js';
 import {htmlPage} from './render/html-page.js';
 import {resultsJson} from './render/results-json.js';
@@ -30,6 +31,8 @@ export interface CompileOptions {
   now?: (() => Date) | undefined;
   /** Which documents to render (default: md, html, json). */
   formats?: ReadonlySet<OutputFormat> | undefined;
+  /** Reuse unchanged blocks and charts (`stet watch`); output bytes are the same. */
+  cache?: BlockCache | undefined;
 }
 
 /** A report compiled in memory: what a build would write, not yet written. */
@@ -65,6 +68,7 @@ export async function compileReport(reportPath: string, options: CompileOptions 
   // 1. Parse and run the plugin.
   const parser = unified().use(remarkParse).use(remarkGfm).use(remarkFrontmatter, ['yaml']).use(remarkStet, {
     allowOutside: options.allowOutside,
+    cache: options.cache,
   });
   const tree = (await parser.run(parser.parse(file), file)) as Root;
   const messages = [...file.messages].sort((a, b) => (a.line ?? 0) - (b.line ?? 0) || (a.column ?? 0) - (b.column ?? 0));

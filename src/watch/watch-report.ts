@@ -1,0 +1,188 @@
+import {watch, type FSWatcher} from 'chokidar';
+import {readFile} from 'node:fs/promises';
+import path from 'node:path';
+import {fileURLToPath} from 'node:url';
+import type {VFileMessage} from 'vfile-message';
+import {createBlockCache, type BlockCache} from '../cache/block-cache.js';
+import {compileReport, type CompiledReport, type CompileOptions} from '../compile-report.js';
+import {writeAtomically} from '../write/write-atomically.js';
+import {changedValues, type ResultsDocument} from './changed-values.js';
+import {conclusionFlips} from './conclusion-flips.js';
+import {filesIn, hashInputs} from './input-hash.js';
+import type {RebuildReport} from './rebuild-summary.js';
+
+export interface WatchOptions extends Pick<CompileOptions, 'out' | 'allowOutside' | 'now'> {
+  /** Quiet time after the last file event before rebuilding (default 120 ms). */
+  debounceMs?: number | undefined;
+  /** Template folders whose files are inputs (default: stet's templates/). */
+  templateDirs?: readonly string[] | undefined;
+  /** Called after the first build and after every rebuild. */
+  onBuild: (outcome: BuildOutcome) => void;
+}
+
+export type BuildOutcome =
+  | {readonly ok: true; readonly compiled: CompiledReport; readonly report: RebuildReport}
+  | {readonly ok: false; readonly messages: readonly VFileMessage[]; readonly error?: unknown};
+
+export interface WatchSession {
+  readonly outDir: string;
+  /** Builds run so far (the first build counts). */
+  readonly builds: number;
+  /** Resolves when no build is running or waiting. */
+  settled(): Promise<void>;
+  close(): Promise<void>;
+}
+
+const stetTemplates = fileURLToPath(new URL('../../templates/', import.meta.url));
+
+/**
+ * Build a report, then rebuild it whenever its inputs change: the report,
+ * every dataset it reads (recomputed after each build, so a dataset an
+ * edit adds is watched too) and the template files.
+ *
+ * chokidar 5 drops the last `change` of a burst (its throttle keeps the
+ * first), so events only start a trailing-edge debounce; the rebuild then
+ * happens only if the sha256 of the inputs differs from the last build's —
+ * the final content always wins. Folders are watched, not files, so an
+ * editor's rename-over save keeps being seen. After a failed build any
+ * event retries, since a failed dataset may not be known as an input yet.
+ */
+export async function watchReport(reportPath: string, options: WatchOptions): Promise<WatchSession> {
+  const report = path.resolve(reportPath);
+  const reportDir = path.dirname(report);
+  const outDir = path.resolve(options.out ?? path.join(reportDir, 'out'));
+  const stetDir = path.join(reportDir, '.stet');
+  const templateDirs = options.templateDirs ?? [stetTemplates];
+  const cache: BlockCache = createBlockCache({dir: path.join(stetDir, 'cache')});
+  const compileOptions: CompileOptions = {out: outDir, allowOutside: options.allowOutside, now: options.now, cache};
+
+  let datasetFiles: string[] = [];
+  let lastHash = '';
+  let lastFailed = false;
+  let previous: ResultsDocument | undefined;
+  let builds = 0;
+  let timer: NodeJS.Timeout | undefined;
+  let running: Promise<void> | undefined;
+  let again = false;
+  let closed = false;
+
+  const inputs = async () => [report, ...datasetFiles, ...(await Promise.all(templateDirs.map(filesIn))).flat()];
+  const folders = () => [...new Set([reportDir, ...templateDirs, ...datasetFiles.map((file) => path.dirname(file))])];
+
+  async function build(): Promise<void> {
+    const hash = await hashInputs(await inputs());
+    if (builds > 0 && hash === lastHash && !lastFailed) return;
+    lastHash = hash;
+    builds++;
+    const started = process.hrtime.bigint();
+    cache.beginBuild();
+    let compiled: CompiledReport;
+    try {
+      compiled = await compileReport(report, compileOptions);
+    } catch (error) {
+      await cache.endBuild();
+      lastFailed = true;
+      options.onBuild({ok: false, messages: [], error});
+      return;
+    }
+    const counts = await cache.endBuild();
+    rememberDatasets(compiled);
+    if (!compiled.ok) {
+      lastFailed = true;
+      options.onBuild({ok: false, messages: compiled.messages});
+      return;
+    }
+    await writeAtomically(outDir, compiled.files);
+    lastFailed = false;
+    const results = JSON.parse(compiled.files.get(`${compiled.name}.results.json`) ?? '{}') as ResultsDocument;
+    const prose = await readFile(report, 'utf8').catch(() => '');
+    const oldIds = Object.keys(previous?.blocks ?? {});
+    const newIds = Object.keys(results.blocks ?? {});
+    const summary: RebuildReport = {
+      milliseconds: Number(process.hrtime.bigint() - started) / 1e6,
+      counts,
+      changed: previous ? changedValues(previous, results, prose) : [],
+      flips: previous ? newIds.flatMap((id) => (previous!.blocks?.[id] ? conclusionFlips(id, previous!.blocks[id]!, results.blocks![id]!) : [])) : [],
+      added: previous ? newIds.filter((id) => !oldIds.includes(id)) : [],
+      removed: previous ? oldIds.filter((id) => !newIds.includes(id)) : [],
+    };
+    previous = results;
+    options.onBuild({ok: true, compiled, report: summary});
+  }
+
+  /** Datasets read or declared become inputs; after a failure none is dropped. */
+  function rememberDatasets(compiled: CompiledReport): void {
+    const data = compiled.data;
+    const read = [...(data?.datasets.values() ?? [])].map((dataset) => dataset.absolutePath);
+    const declared = [...(data?.settings.datasets.values() ?? [])].map((d) => path.resolve(reportDir, d.options.file));
+    const known = [...read, ...declared];
+    datasetFiles = [...new Set(compiled.ok ? known : [...datasetFiles, ...known])];
+  }
+
+  /** Run builds one at a time; a request during a build runs once after it. */
+  function requestBuild(): void {
+    if (closed) return;
+    if (running) {
+      again = true;
+      return;
+    }
+    running = build()
+      .catch((error: unknown) => options.onBuild({ok: false, messages: [], error}))
+      .finally(async () => {
+        running = undefined;
+        if (closed) return;
+        await syncFolders();
+        if (again) {
+          again = false;
+          requestBuild();
+        }
+      });
+  }
+
+  const isIgnored = (file: string) => [outDir, stetDir].some((dir) => file === dir || file.startsWith(dir + path.sep)) ||
+    /(^|[\\/])(node_modules|\.git)([\\/]|$)/.test(file);
+  let watched = new Set<string>(folders());
+  const watcher: FSWatcher = watch([...watched], {ignoreInitial: true, depth: 0, ignored: isIgnored});
+  async function syncFolders(): Promise<void> {
+    const wanted = new Set(folders());
+    const added = [...wanted].filter((folder) => !watched.has(folder));
+    const gone = [...watched].filter((folder) => !wanted.has(folder));
+    if (added.length) watcher.add(added);
+    if (gone.length) await watcher.unwatch(gone);
+    watched = wanted;
+  }
+  watcher.on('all', () => {
+    clearTimeout(timer);
+    timer = setTimeout(() => {
+      timer = undefined;
+      requestBuild();
+    }, options.debounceMs ?? 120);
+  });
+  watcher.on('error', () => {
+    // chokidar reports folders that vanished; the next event or build resyncs.
+  });
+  await new Promise<void>((resolve) => watcher.once('ready', () => resolve()));
+
+  requestBuild();
+  await running;
+
+  const session: WatchSession = {
+    outDir,
+    get builds() {
+      return builds;
+    },
+    async settled() {
+      while (running || timer) {
+        if (running) await running;
+        else await new Promise((resolve) => setTimeout(resolve, 10));
+      }
+    },
+    async close() {
+      closed = true;
+      clearTimeout(timer);
+      await running;
+      await watcher.close();
+    },
+  };
+  return session;
+}
