@@ -3,6 +3,8 @@ import type {ChangedValue} from './changed-values.js';
 import type {ConclusionFlip} from './conclusion-flips.js';
 
 export interface RebuildReport {
+  /** The first build of the session (nothing to compare with). */
+  readonly first: boolean;
   readonly milliseconds: number;
   readonly counts: CacheCounts;
   readonly changed: readonly ChangedValue[];
@@ -19,7 +21,7 @@ export function rebuildSummary(report: RebuildReport, at: Date, loud: (text: str
   const {counts} = report;
   const time = at.toISOString().slice(11, 19);
   const lines = [
-    `[${time}] rebuilt in ${Math.round(report.milliseconds)} ms: ` +
+    `[${time}] ${report.first ? 'built' : 'rebuilt'} in ${Math.round(report.milliseconds)} ms: ` +
       `${counts.computed} block${counts.computed === 1 ? '' : 's'} recomputed, ${counts.reused} reused`,
   ];
   if (report.added.length) lines.push(`  new blocks: ${report.added.join(', ')}`);

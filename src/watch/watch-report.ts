@@ -99,6 +99,7 @@ export async function watchReport(reportPath: string, options: WatchOptions): Pr
     const oldIds = Object.keys(previous?.blocks ?? {});
     const newIds = Object.keys(results.blocks ?? {});
     const summary: RebuildReport = {
+      first: !previous,
       milliseconds: Number(process.hrtime.bigint() - started) / 1e6,
       counts,
       changed: previous ? changedValues(previous, results, prose) : [],
