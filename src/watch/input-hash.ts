@@ -3,17 +3,17 @@ import {readFile, readdir} from 'node:fs/promises';
 import path from 'node:path';
 
 /**
- * One sha256 over the content of every input of a build (files in order,
- * a missing file counted as missing), so a rebuild happens only when some
- * input's bytes changed — whatever the editor's events looked like.
+ * The sha256 (hex) of each file's bytes, or `missing`: what decides whether
+ * anything changed, whatever the editor's file events looked like. Same
+ * form as a loaded dataset's `sha256`, so the two can be compared.
  */
-export async function hashInputs(files: readonly string[]): Promise<string> {
-  const hash = createHash('sha256');
-  for (const file of [...new Set(files)].sort()) {
+export async function hashFiles(files: readonly string[]): Promise<Map<string, string>> {
+  const unique = [...new Set(files)];
+  const hashes = await Promise.all(unique.map(async (file) => {
     const content = await readFile(file).catch(() => undefined);
-    hash.update(`${file}\0${content === undefined ? 'missing' : createHash('sha256').update(content).digest('hex')}\0`);
-  }
-  return hash.digest('hex');
+    return content === undefined ? 'missing' : createHash('sha256').update(content).digest('hex');
+  }));
+  return new Map(unique.map((file, i) => [file, hashes[i]!]));
 }
 
 /** The regular files directly inside a folder (a template folder's files). */

@@ -8,11 +8,11 @@ import {compileReport, type CompiledReport, type CompileOptions} from '../compil
 import {writeAtomically} from '../write/write-atomically.js';
 import {changedValues, type ResultsDocument} from './changed-values.js';
 import {conclusionFlips} from './conclusion-flips.js';
-import {filesIn, hashInputs} from './input-hash.js';
+import {filesIn, hashFiles} from './input-hash.js';
 import type {RebuildReport} from './rebuild-summary.js';
 
 export interface WatchOptions extends Pick<CompileOptions, 'out' | 'allowOutside' | 'now'> {
-  /** Quiet time after the last file event before rebuilding (default 120 ms). */
+  /** Quiet time after the last file event before rebuilding (default 120 ms, at least 75 ms). */
   debounceMs?: number | undefined;
   /** Template folders whose files are inputs (default: stet's templates/). */
   templateDirs?: readonly string[] | undefined;
@@ -32,6 +32,13 @@ export interface WatchSession {
   settled(): Promise<void>;
   close(): Promise<void>;
 }
+
+/**
+ * chokidar 5 emits the first `change` of a path and drops the others for
+ * 50 ms, with no trailing event: reading the inputs only after that window
+ * closed sees every write it swallowed.
+ */
+const minimumQuiet = 75;
 
 const stetTemplates = fileURLToPath(new URL('../../templates/', import.meta.url));
 
@@ -57,7 +64,8 @@ export async function watchReport(reportPath: string, options: WatchOptions): Pr
   const compileOptions: CompileOptions = {out: outDir, allowOutside: options.allowOutside, now: options.now, cache};
 
   let datasetFiles: string[] = [];
-  let lastHash = '';
+  /** Content hash of each input as the last build read it. */
+  let built = new Map<string, string>();
   let lastFailed = false;
   let previous: ResultsDocument | undefined;
   let builds = 0;
@@ -65,14 +73,26 @@ export async function watchReport(reportPath: string, options: WatchOptions): Pr
   let running: Promise<void> | undefined;
   let again = false;
   let closed = false;
+  let watcher: FSWatcher | undefined;
 
   const inputs = async () => [report, ...datasetFiles, ...(await Promise.all(templateDirs.map(filesIn))).flat()];
   const folders = () => [...new Set([reportDir, ...templateDirs, ...datasetFiles.map((file) => path.dirname(file))])];
 
-  async function build(): Promise<void> {
-    const hash = await hashInputs(await inputs());
-    if (builds > 0 && hash === lastHash && !lastFailed) return;
-    lastHash = hash;
+  /**
+   * Whether some input's bytes differ from what the last build read. After
+   * a failure any event retries (`strict` false), since a dataset that
+   * failed to load may not be known as an input yet.
+   */
+  async function changed(strict: boolean): Promise<boolean> {
+    if (builds === 0 || (lastFailed && !strict)) return true;
+    const now = await hashFiles(await inputs());
+    return [...now].some(([file, hash]) => built.get(file) !== hash);
+  }
+
+  async function build(strict: boolean): Promise<void> {
+    if (!(await changed(strict))) return;
+    // Hashed before compiling: a change during the build makes the next check differ.
+    const before = await hashFiles(await inputs());
     builds++;
     const started = process.hrtime.bigint();
     cache.beginBuild();
@@ -81,12 +101,17 @@ export async function watchReport(reportPath: string, options: WatchOptions): Pr
       compiled = await compileReport(report, compileOptions);
     } catch (error) {
       await cache.endBuild();
+      built = before;
       lastFailed = true;
       options.onBuild({ok: false, messages: [], error});
       return;
     }
     const counts = await cache.endBuild();
     rememberDatasets(compiled);
+    built = before;
+    // Datasets count as the bytes the build actually read.
+    for (const dataset of compiled.data?.datasets.values() ?? []) built.set(dataset.absolutePath, dataset.sha256);
+    for (const [file, hash] of await hashFiles((await inputs()).filter((file) => !built.has(file)))) built.set(file, hash);
     if (!compiled.ok) {
       lastFailed = true;
       options.onBuild({ok: false, messages: compiled.messages});
@@ -121,18 +146,18 @@ export async function watchReport(reportPath: string, options: WatchOptions): Pr
   }
 
   /** Run builds one at a time; a request during a build runs once after it. */
-  function requestBuild(): void {
+  function requestBuild(strict = false): void {
     if (closed) return;
     if (running) {
       again = true;
       return;
     }
-    running = build()
+    running = build(strict)
       .catch((error: unknown) => options.onBuild({ok: false, messages: [], error}))
       .finally(async () => {
         running = undefined;
         if (closed) return;
-        await syncFolders();
+        if (watcher) await syncFolders();
         if (again) {
           again = false;
           requestBuild();
@@ -140,16 +165,20 @@ export async function watchReport(reportPath: string, options: WatchOptions): Pr
       });
   }
 
+  // The first build finds the datasets, so their folders are watched from the start.
+  requestBuild();
+  await running;
+
   const isIgnored = (file: string) => [outDir, stetDir].some((dir) => file === dir || file.startsWith(dir + path.sep)) ||
     /(^|[\\/])(node_modules|\.git)([\\/]|$)/.test(file);
   let watched = new Set<string>(folders());
-  const watcher: FSWatcher = watch([...watched], {ignoreInitial: true, depth: 0, ignored: isIgnored});
+  watcher = watch([...watched], {ignoreInitial: true, depth: 0, ignored: isIgnored});
   async function syncFolders(): Promise<void> {
     const wanted = new Set(folders());
     const added = [...wanted].filter((folder) => !watched.has(folder));
     const gone = [...watched].filter((folder) => !wanted.has(folder));
-    if (added.length) watcher.add(added);
-    if (gone.length) await watcher.unwatch(gone);
+    if (added.length) watcher?.add(added);
+    if (gone.length) await watcher?.unwatch(gone);
     watched = wanted;
   }
   watcher.on('all', () => {
@@ -157,14 +186,14 @@ export async function watchReport(reportPath: string, options: WatchOptions): Pr
     timer = setTimeout(() => {
       timer = undefined;
       requestBuild();
-    }, options.debounceMs ?? 120);
+    }, Math.max(options.debounceMs ?? 120, minimumQuiet));
   });
   watcher.on('error', () => {
     // chokidar reports folders that vanished; the next event or build resyncs.
   });
   await new Promise<void>((resolve) => watcher.once('ready', () => resolve()));
-
-  requestBuild();
+  // An edit during the first build, before the watcher was ready, is not lost.
+  requestBuild(true);
   await running;
 
   const session: WatchSession = {
@@ -182,7 +211,7 @@ export async function watchReport(reportPath: string, options: WatchOptions): Pr
       closed = true;
       clearTimeout(timer);
       await running;
-      await watcher.close();
+      await watcher?.close();
     },
   };
   return session;
