@@ -6,6 +6,7 @@
  * - `failed` (data: the error text): show a small banner, keep the page;
  * - `ok`: remove the banner.
  * Text goes in with textContent, so error messages are never markup.
+ * `<html data-stet-live="connected">` says the stream is open.
  */
 export const liveReloadScript = `<script data-stet-live-reload>
 (() => {
@@ -35,6 +36,7 @@ export const liveReloadScript = `<script data-stet-live-reload>
     el.textContent = 'stet: the last rebuild failed; this is the previous output.\\n' + text;
   };
   const events = new EventSource('/__stet/events');
+  events.addEventListener('open', () => { document.documentElement.dataset.stetLive = 'connected'; });
   events.addEventListener('rebuilt', (event) => {
     sessionStorage.setItem(key, event.data);
     events.close();
