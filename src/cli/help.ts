@@ -21,6 +21,8 @@ Options:
   --out DIR          output folder
   --to FORMATS       comma-separated: md, html, json, tex (default md,html,json)
   --allow-outside    allow data files outside the report's folder
+  --serve [PORT]     watch: serve the output on 127.0.0.1 with live reload
+                     (default port 4817; 0 picks a free one)
   -h, --help         show this help
   -v, --version      show stet's version
 

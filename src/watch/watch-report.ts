@@ -169,7 +169,11 @@ export async function watchReport(reportPath: string, options: WatchOptions): Pr
   requestBuild();
   await running;
 
-  const isIgnored = (file: string) => [outDir, stetDir].some((dir) => file === dir || file.startsWith(dir + path.sep)) ||
+  const inside = (file: string, dir: string) => file === dir || file.startsWith(dir + path.sep);
+  // An output folder that holds the report (`--out .`) cannot be ignored whole;
+  // its writes then only cost a hash check, since outputs are not inputs.
+  const ignoredDirs = inside(reportDir, outDir) ? [stetDir] : [outDir, stetDir];
+  const isIgnored = (file: string) => ignoredDirs.some((dir) => inside(file, dir)) ||
     /(^|[\\/])(node_modules|\.git)([\\/]|$)/.test(file);
   let watched = new Set<string>(folders());
   watcher = watch([...watched], {ignoreInitial: true, depth: 0, ignored: isIgnored});
