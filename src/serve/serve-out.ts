@@ -18,6 +18,9 @@ const types: Record<string, string> = {
   '.tex': 'text/plain; charset=utf-8',
 };
 
+const waitingPage = '<!doctype html><html lang="en"><head><meta charset="utf-8"><title>stet</title></head>' +
+  '<body><p>No output yet: stet shows the report here after its first good build.</p></body></html>\n';
+
 export interface OutServer {
   readonly url: string;
   readonly port: number;
@@ -53,7 +56,13 @@ export async function serveOut(outDir: string, index: string, port: number = def
         return;
       }
       const file = resolveInside(outDir, url === '/' ? index : url);
-      if (!file || !(await stat(file).then((s) => s.isFile(), () => false))) return end(response, 404, 'not found');
+      const exists = file !== undefined && (await stat(file).then((s) => s.isFile(), () => false));
+      if (!exists && url === '/') {
+        // No good build yet: a page that waits for the first one.
+        response.writeHead(200, {'content-type': types['.html']!, 'cache-control': 'no-store'});
+        return void response.end(withLiveReload(waitingPage));
+      }
+      if (!file || !exists) return end(response, 404, 'not found');
       const body = await readFile(file);
       const type = types[path.extname(file).toLowerCase()] ?? 'application/octet-stream';
       const content = type.startsWith('text/html') ? withLiveReload(body.toString('utf8')) : body;

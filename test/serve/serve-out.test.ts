@@ -47,6 +47,17 @@ describe('serving the output folder', () => {
     expect(await readFile(path.join(root, 'out/report.html'), 'utf8')).toBe(page);
   });
 
+  it('serves a page that waits for the first good build when there is no output yet', async () => {
+    const root = await workspace({'report.md': ''});
+    const server = await serveOut(path.join(root, 'out'), 'report.html', 0);
+    servers.push(server);
+    const served = await get(server, '/');
+    expect(served.status).toBe(200);
+    expect(served.body).toContain('No output yet');
+    expect(served.body).toContain('/__stet/events');
+    expect((await get(server, '/report.html')).status).toBe(404);
+  });
+
   it('serves charts with their type, and nothing outside the folder', async () => {
     const {server} = await start();
     expect(await get(server, '/charts/a.svg')).toMatchObject({status: 200, type: 'image/svg+xml', body: '<svg/>'});

@@ -60,9 +60,14 @@ afterEach(async () => {
 });
 
 async function start(debounceMs = 100): Promise<Harness> {
-  const dir = await workspace({'report.md': report, 'data/beams.csv': beams(0), 'other/spare.csv': spare});
+  const dir = await workspace({'report.md': report, 'data/beams.csv': beams(0), 'other/spare.csv': spare, 'theme/report.css': 'p {}'});
   const outcomes: BuildOutcome[] = [];
-  const session = await watchReport(path.join(dir, 'report.md'), {debounceMs, onBuild: (o) => outcomes.push(o), now: () => new Date(0)});
+  const session = await watchReport(path.join(dir, 'report.md'), {
+    debounceMs,
+    onBuild: (o) => outcomes.push(o),
+    now: () => new Date(0),
+    templateDirs: [path.join(dir, 'theme')],
+  });
   sessions.push(session);
   expect(outcomes).toHaveLength(1);
   expect(outcomes[0]!.ok).toBe(true);
@@ -137,6 +142,13 @@ describe('watching a report', () => {
     await new Promise((resolve) => setTimeout(resolve, 600));
     await h.session.settled();
     expect(h.outcomes).toHaveLength(1);
+  });
+
+  it('rebuilds when a template file changes, recomputing no block', async () => {
+    const h = await start();
+    await writeFile(path.join(h.dir, 'theme/report.css'), 'p { color: black }');
+    const outcome = await h.nextBuild();
+    expect(outcome.ok && outcome.report.counts).toMatchObject({computed: 0, reused: 2});
   });
 
   it('recomputes no block after a prose edit', async () => {
