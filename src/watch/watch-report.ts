@@ -117,7 +117,14 @@ export async function watchReport(reportPath: string, options: WatchOptions): Pr
       options.onBuild({ok: false, messages: compiled.messages});
       return;
     }
-    await writeAtomically(outDir, compiled.files);
+    try {
+      await writeAtomically(outDir, compiled.files);
+    } catch (error) {
+      // Nothing was renamed into place: the previous output stays; retry on the next event.
+      lastFailed = true;
+      options.onBuild({ok: false, messages: [], error});
+      return;
+    }
     lastFailed = false;
     const results = JSON.parse(compiled.files.get(`${compiled.name}.results.json`) ?? '{}') as ResultsDocument;
     const prose = await readFile(report, 'utf8').catch(() => '');
