@@ -182,6 +182,22 @@ describe('watching a report', () => {
     expect(await meanOfA(h)).toBeCloseTo((10.9 + 9.8 + 10.4 + 10.0 + 9.7 + 10.2) / 6, 12);
   });
 
+  it('keeps watching when the output cannot be written, and writes it once it can', async () => {
+    const dir = await workspace({'report.md': report, 'data/beams.csv': beams(0), 'other/spare.csv': spare, 'blocked': 'a file, not a folder'});
+    const outcomes: BuildOutcome[] = [];
+    const session = await watchReport(path.join(dir, 'report.md'), {out: path.join(dir, 'blocked'), onBuild: (o) => outcomes.push(o)});
+    sessions.push(session);
+    expect(outcomes.map((o) => o.ok)).toEqual([false]);
+    await rm(path.join(dir, 'blocked'));
+    // No input changed, but the failed write is retried on the next event.
+    await writeFile(path.join(dir, 'notes.txt'), 'any event');
+    await waitFor(() => outcomes.length > 1);
+    await session.settled();
+    expect(outcomes.at(-1)!.ok).toBe(true);
+    expect(JSON.parse(await readFile(path.join(dir, 'blocked', 'report.results.json'), 'utf8')).blocks.load.groups.A.mean)
+      .toBeCloseTo((10.1 + 9.8 + 10.4 + 10.0 + 9.7 + 10.2) / 6, 12);
+  });
+
   it('watches a dataset that an edit of the report adds, in a folder not watched before', async () => {
     const h = await start();
     await writeFile(path.join(h.dir, 'report.md'), `${report}\n\`\`\`stet\nid: extra\ntest: one-sample-t\ndata: more/extra.csv\ny: v\nmu: 0\nshow: [sentence]\n\`\`\`\n`);
