@@ -2,6 +2,7 @@ import type {Code, Root, Yaml} from 'mdast';
 import path from 'node:path';
 import {SKIP, visit} from 'unist-util-visit';
 import type {VFile} from 'vfile';
+import type {BlockCache} from './cache/block-cache.js';
 import {blockChart, type BlockChart} from './charts/block-chart.js';
 import {adjustFamilies} from './compute/adjust-families.js';
 import {computeBlock, type ComputedBlock} from './compute/compute-block.js';
@@ -28,6 +29,8 @@ export interface RemarkStetOptions {
   charts?: boolean | undefined;
   /** The block's plan label and count of specifications, from `stet.lock` and the ledger (default: none). */
   disclose?: ((spec: BlockSpec, settings: DocumentSettings) => Disclosure | undefined) | undefined;
+  /** Reuse computed blocks and charts whose inputs did not change (`stet watch`). */
+  cache?: BlockCache | undefined;
 }
 
 /** What the plugin leaves on `file.data.stet` for writers. */
@@ -100,7 +103,8 @@ export default function remarkStet(options: RemarkStetOptions = {}) {
     for (const [node, spec] of specs) {
       try {
         const dataset = await loader.load(spec);
-        computed.set(node, computeBlock(spec, dataset, selectRows(spec, dataset)));
+        const compute = () => computeBlock(spec, dataset, selectRows(spec, dataset));
+        computed.set(node, options.cache ? await options.cache.computed(spec, dataset, compute) : compute());
       } catch (error) {
         failed.add(spec.id);
         report(error);
@@ -120,7 +124,8 @@ export default function remarkStet(options: RemarkStetOptions = {}) {
     const charts = new Map<string, BlockChart>();
     if (options.charts !== false) {
       for (const block of blocks.values()) {
-        const chart = await attemptAsync(report, () => blockChart(block));
+        const render = () => blockChart(block);
+        const chart = await attemptAsync(report, () => (options.cache ? options.cache.chart(block, render) : render()));
         if (chart) charts.set(block.computed.spec.id, chart);
       }
     }

@@ -8,7 +8,7 @@ import {sha256} from '../spec/spec-fingerprint.js';
 import {version} from '../version.js';
 import {explainInputs} from './explain-inputs.js';
 import {compareOutputs} from './compare-outputs.js';
-import {hashTemplates, manifestName, readManifest, type BuildManifest} from './manifest.js';
+import {hashTemplates, manifestName, readManifest, templateFile, type BuildManifest} from './manifest.js';
 import {outputHash} from './output-hash.js';
 
 /** Options of `checkReport`; every field optional. */
@@ -62,7 +62,7 @@ export async function checkReport(reportPath: string, options: CheckOptions = {}
   const compiled = await compileReport(absolute, {
     out: outDir,
     allowOutside: options.allowOutside,
-    ...(manifest ? {formats: new Set(manifest.formats)} : {}),
+    ...(manifest ? {formats: new Set(manifest.formats), template: templateFile(absolute, manifest.page.template)?.file, allowHtml: manifest.page.allow_html} : {}),
   });
   if (!compiled.ok) return {fresh: false, compiled: true, findings: [], messages: compiled.messages, outDir};
   const outputs = await compareOutputs(outDir, compiled.files, manifest);
@@ -77,7 +77,7 @@ async function unchanged(reportPath: string, outDir: string, manifest: BuildMani
   const reportDir = path.dirname(reportPath);
   if (manifest.stet !== version) return false;
   if (sha256(await readFile(reportPath)) !== manifest.report.sha256) return false;
-  if (manifest.formats.includes('html') && !sameRecord(await hashTemplates(), manifest.templates)) return false;
+  if (manifest.formats.includes('html') && !sameRecord(await hashTemplates(templateFile(reportPath, manifest.page.template)), manifest.templates)) return false;
   for (const dataset of Object.values(manifest.datasets)) {
     const file = path.resolve(reportDir, dataset.file);
     const relative = path.relative(reportDir, file);

@@ -4,7 +4,7 @@ import type {CompiledReport} from '../compile-report.js';
 import {blockSpecHash, sha256} from '../spec/spec-fingerprint.js';
 import {version} from '../version.js';
 import type {Finding} from './check-report.js';
-import {disclosureRecord, hashTemplates, type BuildManifest} from './manifest.js';
+import {disclosureRecord, hashTemplates, templateFile, type BuildManifest} from './manifest.js';
 import {proseHash} from './prose-hash.js';
 
 /**
@@ -18,7 +18,7 @@ export async function explainInputs(compiled: CompiledReport, manifest: BuildMan
   const add = (subject: string, reason: string) => findings.push({subject, reason, kind: 'input'});
   if (manifest.stet !== version) add('stet', `version changed (${manifest.stet} → ${version})`);
   if (manifest.formats.includes('html')) {
-    const templates = await hashTemplates();
+    const templates = await hashTemplates(templateFile(compiled.reportPath, manifest.page.template));
     for (const [name, hash] of Object.entries(templates)) if (manifest.templates[name] !== hash) add(`template ${name}`, 'changed');
   }
   for (const [id, spec] of data.specs) {

@@ -27,6 +27,8 @@ Options:
   --allow-outside    allow data files outside the report's folder
   --show             lock: print the locked plan and the report's differences
   --force            lock: replace a lock the report differs from
+  --serve [PORT]     watch: serve the output on 127.0.0.1 with live reload
+                     (default port 4817; 0 picks a free one)
   -h, --help         show this help
   -v, --version      show stet's version
 

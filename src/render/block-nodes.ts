@@ -16,7 +16,9 @@ export function blockNodes(code: Code, block: InterpretedBlock, chart: {alt: str
   const position = code.position;
   const nodes: RootContent[] = [];
   if (spec.show.has('sentence')) {
-    nodes.push({type: 'paragraph', position, children: [{type: 'text', value: block.result.sentence, position}]});
+    // `data-stet-block` lets the live-reload page of `stet watch --serve` find the sentence.
+    const data = {hProperties: {dataStetBlock: spec.id}};
+    nodes.push({type: 'paragraph', position, data, children: [{type: 'text', value: block.result.sentence, position}]});
   }
   if (spec.show.has('table')) {
     const tables = resultsTables(block);

@@ -21,6 +21,20 @@ describe('checkReport', () => {
     expect(result).toMatchObject({fresh: true, compiled: false, findings: []});
   });
 
+  it('checks against the template and --allow-html the build used', async () => {
+    const report = await smallWorkspace();
+    const template = path.join(path.dirname(report), 'page.html');
+    await writeFile(template, '<main><!--stet:body--></main><aside><!--stet:caution--></aside>\n');
+    await writeFile(report, `${await readFile(report, 'utf8')}\n<kbd>raw</kbd> <script>x()</script>\n`);
+    expect((await buildReport(report, {template, allowHtml: true})).ok).toBe(true);
+    expect(await checkReport(report)).toMatchObject({fresh: true, compiled: false});
+
+    await edit(template, '<main>', '<main class="wide">');
+    const result = await checkReport(report);
+    expect(result.fresh).toBe(false);
+    expect(lines(result)).toEqual(expect.arrayContaining(['template page.html: changed', 'report.html: out of date']));
+  });
+
   it('names the block and the data file after a data edit', async () => {
     const {report} = await built();
     await edit(path.join(path.dirname(report), 'data/loads.csv'), 'B,12.0,1', 'B,12.5,1');
