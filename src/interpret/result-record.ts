@@ -2,6 +2,7 @@ import type {BlockResult} from '../compute/block-result.js';
 import type {ComputedBlock} from '../compute/compute-block.js';
 import {blockNumbers} from './block-numbers.js';
 import {writeSentence, type Adjustment} from './sentence.js';
+import {plainText, segmentsOf, type SentenceSegment} from './symbol-marks.js';
 
 /**
  * The block's result record (contract §6): the computed numbers, the
@@ -9,14 +10,18 @@ import {writeSentence, type Adjustment} from './sentence.js';
  */
 export interface InterpretedBlock {
   readonly result: BlockResult;
-  /** The compact statistic string `{{id}}` renders. */
+  /** The sentence in segments, statistic symbols marked, for Markdown and HTML. */
+  readonly segments: readonly SentenceSegment[];
+  /** The compact statistic string `{{id}}` renders, symbols marked (`symbol-marks.ts`). */
   readonly compact: string;
   readonly computed: ComputedBlock;
 }
 
 export function interpretBlock(block: ComputedBlock, adjustment: Adjustment | undefined): InterpretedBlock {
   const {spec, outcome} = block;
-  const sentence = writeSentence(block, adjustment);
+  const marked = writeSentence(block, adjustment);
+  const sentence = plainText(marked);
+  const segments = segmentsOf(marked);
   const compact = blockNumbers(block, adjustment?.pAdjusted ?? outcome?.p).compact;
   const n = block.rows.used;
   const base = {
@@ -31,7 +36,7 @@ export function interpretBlock(block: ComputedBlock, adjustment: Adjustment | un
     warnings: outcome?.warnings ?? [],
     rows: block.rows,
   };
-  if (!outcome) return {result: base, compact, computed: block};
+  if (!outcome) return {result: base, segments, compact, computed: block};
   const decisive = adjustment?.pAdjusted ?? outcome.p;
   const result: BlockResult = {
     // Method-specific fields first, so they can never overwrite the contract's.
@@ -52,5 +57,5 @@ export function interpretBlock(block: ComputedBlock, adjustment: Adjustment | un
     smallest_effect: spec.smallestEffect ?? null,
     family: adjustment ? {name: adjustment.family, adjust: adjustment.method, size: adjustment.size} : null,
   };
-  return {result, compact, computed: block};
+  return {result, segments, compact, computed: block};
 }

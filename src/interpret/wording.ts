@@ -1,3 +1,5 @@
+import {symbol} from './symbol-marks.js';
+
 /**
  * Every phrase stet writes about a result, in one place so a reviewer can
  * read all of it at once (and a translation could replace it). Functions
@@ -97,25 +99,67 @@ export const wording = {
   // The estimate, in the data's units, with its direction in plain words.
   twoGroupEstimate: (outcome: string, amount: string, direction: Direction, second: string, first: string) =>
     direction === 'none'
-      ? `mean ${outcome} was the same to the reported precision in ${second} and ${first}`
+      ? `mean ${outcome} in ${second} and ${first} matched to the reported precision`
       : `mean ${outcome} was ${amount} ${direction} in ${second} than in ${first}`,
   pairedEstimate: (amount: string, direction: Direction, second: string, first: string) =>
     direction === 'none'
-      ? `${second} and ${first} agreed on average to the reported precision`
+      ? `${second} and ${first} matched on average to the reported precision`
       : `${second} was on average ${amount} ${direction} than ${first} within pairs`,
   oneSampleEstimate: (outcome: string, mean: string, amount: string, direction: Direction, mu: string) =>
     direction === 'none'
-      ? `mean ${outcome} was ${mean}, equal to the reference value ${mu} to the reported precision`
+      ? `mean ${outcome} was ${mean}, matching the reference value ${mu} to the reported precision`
       : `mean ${outcome} was ${mean}, ${amount} ${direction === 'higher' ? 'above' : 'below'} the reference value ${mu}`,
-
+  shiftEstimate: (outcome: string, amount: string, direction: Direction, second: string, first: string) =>
+    direction === 'none'
+      ? `typical ${outcome} in ${second} and ${first} matched to the reported precision (Hodges–Lehmann shift)`
+      : `${outcome} was typically ${amount} ${direction} in ${second} than in ${first} (Hodges–Lehmann shift)`,
+  pairedShiftEstimate: (amount: string, direction: Direction, second: string, first: string) =>
+    direction === 'none'
+      ? `${second} and ${first} typically matched within pairs to the reported precision (Hodges–Lehmann estimate)`
+      : `${second} was typically ${amount} ${direction} than ${first} within pairs (Hodges–Lehmann estimate)`,
+  medianDifferenceEstimate: (amount: string, direction: Direction, second: string, first: string) =>
+    direction === 'none'
+      ? `the median difference within pairs was zero to the reported precision`
+      : `the median difference within pairs was ${amount}, ${second} ${direction} than ${first}`,
+  largestGapEstimate: (outcome: string, amount: string, direction: Direction, high: string, low: string, ranks: boolean) =>
+    direction === 'none'
+      ? `${ranks ? 'typical' : 'mean'} ${outcome} of the groups matched to the reported precision`
+      : `the largest gap was between ${high} and ${low}: ${ranks ? '' : 'mean '}${outcome} was ${ranks ? 'typically ' : ''}${amount} ${direction} in ${high} than in ${low}` +
+        (ranks ? ' (Hodges–Lehmann shift)' : ''),
+  correlationEstimate: (symbolName: string, value: string, direction: Direction, x: string, y: string) =>
+    direction === 'none'
+      ? `${symbolName} was ${value}, too close to zero to give a direction at this precision`
+      : `higher ${x} went with ${direction} ${y}: ${symbolName} = ${value}`,
+  slopeEstimate: (y: string, amount: string, direction: Direction, x: string, others: boolean) =>
+    direction === 'none'
+      ? `the slope of ${y} on ${x} was zero to the reported precision`
+      : `${y} was ${amount} ${direction} for each unit more of ${x}${others ? ', with the other predictors held fixed' : ''}`,
+  proportionEstimate: (success: string, value: string, amount: string, direction: Direction, mu: string) =>
+    direction === 'none'
+      ? `the proportion of “${success}” was ${value}, matching ${mu} to the reported precision`
+      : `the proportion of “${success}” was ${value}, ${amount} ${direction === 'higher' ? 'above' : 'below'} ${mu}`,
+  twoProportionEstimate: (success: string, amount: string, direction: Direction, second: string, first: string, p2: string, p1: string) =>
+    direction === 'none'
+      ? `the proportion of “${success}” in ${second} and ${first} matched to the reported precision (${p2} and ${p1})`
+      : `the proportion of “${success}” was ${amount} ${direction} in ${second} (${p2}) than in ${first} (${p1})`,
+  pairedProportionEstimate: (level: string, amount: string, direction: Direction, second: string, first: string) =>
+    direction === 'none'
+      ? `the proportion of “${level}” at ${second} and at ${first} matched to the reported precision`
+      : `the proportion of “${level}” was ${amount} ${direction} at ${second} than at ${first}`,
+  oddsRatioEstimate: (event: string, ratio: string, second: string, first: string) =>
+    `the odds of “${event}” were ${ratio} times as high in ${second} as in ${first}`,
 
   // One-sided tests name their alternative hypothesis in words.
   twoGroupAlternative: (outcome: string, higher: boolean, second: string, first: string) =>
-    `One-sided test: the alternative hypothesis is that mean ${outcome} is ${higher ? 'higher' : 'lower'} in ${second} than in ${first}.`,
+    `One-sided test: the alternative hypothesis is that ${outcome} is ${higher ? 'higher' : 'lower'} in ${second} than in ${first}.`,
   pairedAlternative: (higher: boolean, second: string, first: string) =>
-    `One-sided test: the alternative hypothesis is that ${second} is ${higher ? 'higher' : 'lower'} than ${first} on average.`,
+    `One-sided test: the alternative hypothesis is that ${second} is ${higher ? 'higher' : 'lower'} than ${first} within pairs.`,
   oneSampleAlternative: (outcome: string, higher: boolean, mu: string) =>
-    `One-sided test: the alternative hypothesis is that mean ${outcome} is ${higher ? 'above' : 'below'} ${mu}.`,
+    `One-sided test: the alternative hypothesis is that ${outcome} is ${higher ? 'above' : 'below'} ${mu}.`,
+  associationAlternative: (higher: boolean, x: string, y: string) =>
+    `One-sided test: the alternative hypothesis is that higher ${x} goes with ${higher ? 'higher' : 'lower'} ${y}.`,
+  proportionAlternative: (higher: boolean, subject: string) =>
+    `One-sided test: the alternative hypothesis is that ${subject} is ${higher ? 'higher' : 'lower'}.`,
 
   significant: (test: string, contrast: string, alpha: string, stats: string, nullHypothesis: string) =>
     `${testSubject(test)} found a statistically significant ${contrast} at the pre-declared α = ${alpha} ` +
@@ -125,7 +169,6 @@ export const wording = {
     `α = ${alpha} (${stats}); the null hypothesis is not rejected.`,
   estimateSignificant: (estimate: string, ci: string) => `${capitalize(estimate)} (${ci}).`,
   estimateNotSignificant: (estimate: string, ci: string) => `In these data, ${estimate} (${ci}).`,
-  genericEstimate: (name: string, value: string) => `the ${name} was ${value}`,
   compatibleValues: (claim: string, ci: string) =>
     `This does not show that ${claim}: the ${ci} shows the values still compatible with the data.`,
   equivalenceContrast: (outcome: string, second: string, first: string) => `mean ${outcome} of ${second} and ${first}`,
@@ -138,18 +181,21 @@ export const wording = {
     `α = ${alpha}: the ${ci} extends beyond ±${margin} (${stats}). This does not show that a difference of ${margin} or more exists.`,
   posthocDiffering: (procedure: string, alpha: string, pairs: readonly string[]) =>
     `Pairs that differ at α = ${alpha} (${procedure}-adjusted): ${pairs.join('; ')}.`,
-  posthocNone: (procedure: string) => `No pair of groups differed significantly after ${procedure} adjustment.`,
+  posthocNone: (procedure: string, alpha: string, pairs: number) =>
+    `After ${procedure} adjustment, none of the ${pairs} pairs of groups differed statistically significantly at α = ${alpha}.`,
   posthocPair: (contrast: string, amount: string, ci: string | undefined, p: string) =>
     `${contrast} = ${amount}${ci ? ` (${ci}, ${p})` : ` (${p})`}`,
   assumptionNormality: (group: string, statistic: string, p: string, alternative: string | undefined) =>
-    `The Shapiro–Wilk check suggests non-normal data${group ? ` in ${group}` : ''} (W = ${statistic}, ${p})` +
+    `The Shapiro–Wilk check suggests non-normal data${group ? ` in ${group}` : ''} (${symbol('W')} = ${statistic}, ${p})` +
     (alternative ? `; with small samples, consider declaring \`test: ${alternative}\`.` : '.'),
   assumptionSpread: (statistic: string, p: string, test: string, alternative: string) =>
-    `Levene’s check suggests unequal spreads (F = ${statistic}, ${p}); ${test} assumes equal spreads, so consider declaring \`test: ${alternative}\`.`,
-  spearmanBeside: (rho: string, p: string) => `Spearman’s rank correlation, reported beside it, was ρ = ${rho} (${p}).`,
+    `Levene’s check suggests unequal spreads (${symbol('F')} = ${statistic}, ${p}); ${test} assumes equal spreads, so consider declaring \`test: ${alternative}\`.`,
+  spearmanBeside: (rho: string, p: string) => `Spearman’s rank correlation, reported beside it, was ${symbol('ρ')} = ${rho} (${p}).`,
   autoChoice: (reason: string) => `The test was chosen from the declared design: ${reason}.`,
   variant: (variant: string) => `The p-value is from the ${variant}.`,
   effect: (effect: string) => `The standardized effect was ${effect}.`,
+  effectWithoutInterval: (effect: string) => `The standardized effect was ${effect}; no interval is established for it.`,
+  doesNotShow: (claim: string) => `This does not show that ${claim}.`,
   powerAtSmallestEffect: (claim: string, power: string, smallest: string) =>
     `This does not show that ${claim}: the test had ${power} power to detect a difference of ${smallest}.`,
   minimumDetectable: (claim: string, amount: string) =>
@@ -163,14 +209,14 @@ export const wording = {
     `The interval includes differences both smaller and larger than the smallest effect of interest (${smallest}), so whether the difference matters in practice remains uncertain.`,
 
   adjusted: (method: string, size: number, family: string, p: string) =>
-    `The decision uses the ${method}-adjusted ${p}, across the ${size} tests of family “${family}”.`,
+    `The decision uses the p-value ${method}-adjusted across the ${size} tests of family “${family}” (${p}).`,
 
   smallSample: (n: number) =>
     `With only ${n} observations in the smallest group, the test leans on approximately normal data, which so few observations cannot check.`,
 
   describeAll: (outcome: string, n: string, mean: string, sd: string, median: string, min: string, max: string) =>
-    `${capitalize(outcome)} (n = ${n}): mean ${mean}, SD ${sd}, median ${median}, range ${min} to ${max}.`,
-  describeGroup: (label: string, n: string, mean: string, sd: string) => `${label} (n = ${n}): mean ${mean}, SD ${sd}`,
+    `${capitalize(outcome)} (${symbol('n')} = ${n}): mean ${mean}, ${symbol('SD')} ${sd}, median ${median}, range ${min} to ${max}.`,
+  describeGroup: (label: string, n: string, mean: string, sd: string) => `${label} (${symbol('n')} = ${n}): mean ${mean}, ${symbol('SD')} ${sd}`,
   describeGroups: (outcome: string, by: string, parts: readonly string[]) =>
     `${capitalize(outcome)} by ${by}: ${parts.join('; ')}.`,
 
@@ -217,21 +263,21 @@ export const effectSymbols: Record<string, string> = {
   'r-squared': 'R²',
 };
 
-/** Names of effect sizes in sentences. */
+/** Names of effect sizes in sentences; Latin symbols marked for italics. */
 export const effectNames: Record<string, string> = {
-  'hedges-g': 'Hedges’ g',
+  'hedges-g': `Hedges’ ${symbol('g')}`,
   'rank-biserial': 'the rank-biserial correlation',
-  'eta-squared': 'η²',
-  'omega-squared': 'ω²',
-  'epsilon-squared': 'ε²',
-  'cramers-v': 'Cramér’s V',
-  'cohens-w': 'Cohen’s w',
-  'cohens-h': 'Cohen’s h',
+  'eta-squared': symbol('η²'),
+  'omega-squared': symbol('ω²'),
+  'epsilon-squared': symbol('ε²'),
+  'cramers-v': `Cramér’s ${symbol('V')}`,
+  'cohens-w': `Cohen’s ${symbol('w')}`,
+  'cohens-h': `Cohen’s ${symbol('h')}`,
   'odds-ratio': 'the odds ratio',
-  r: 'r',
-  rho: 'ρ',
-  'tau-b': 'τ_b',
-  'r-squared': 'R²',
+  r: `Pearson’s ${symbol('r')}`,
+  rho: `Spearman’s ${symbol('ρ')}`,
+  'tau-b': `Kendall’s ${symbol('τ_b')}`,
+  'r-squared': symbol('R²'),
   'proportion-positive': 'the proportion of positive differences',
 };
 

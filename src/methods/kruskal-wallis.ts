@@ -101,6 +101,7 @@ function extremeShift(samples: readonly Sample[], meanRanks: readonly number[], 
   const differences = pairwiseDifferences(a.values, b.values);
   const critical = normalCriticalCount(count, sd, alphaTail);
   return {
+    pair: [a.label, b.label],
     name: `Hodges–Lehmann shift (${b.label} - ${a.label})`,
     value: medianOf(differences),
     ci: orderStatisticInterval((i) => selectKth(differences, i), count, critical, 'two-sided'),

@@ -145,6 +145,8 @@ export interface Estimate {
   readonly ci: readonly [number, number];
   readonly level: number;
   readonly units?: string;
+  /** k-group tests: the two groups the estimate compares, `[reference, other]` (estimate = other − reference). */
+  readonly pair?: readonly [string, string];
 }
 
 export interface EffectSize {

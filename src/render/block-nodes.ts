@@ -1,4 +1,5 @@
-import type {Code, RootContent} from 'mdast';
+import type {Code, PhrasingContent, RootContent} from 'mdast';
+import {styleNamed} from '../interpret/number-style.js';
 import type {InterpretedBlock} from '../interpret/result-record.js';
 import {resultsTables} from './results-tables.js';
 
@@ -12,7 +13,14 @@ export function blockNodes(code: Code, block: InterpretedBlock, chart: {alt: str
   const position = code.position;
   const nodes: RootContent[] = [];
   if (spec.show.has('sentence')) {
-    nodes.push({type: 'paragraph', position, children: [{type: 'text', value: block.result.sentence, position}]});
+    // Statistic symbols in italics where the style asks (JSON keeps the plain sentence).
+    const italic = styleNamed(spec.style).italicSymbols;
+    const children: PhrasingContent[] = block.segments.map((segment) =>
+      segment.symbol && italic
+        ? {type: 'emphasis', position, children: [{type: 'text', value: segment.text, position}]}
+        : {type: 'text', value: segment.text, position},
+    );
+    nodes.push({type: 'paragraph', position, children: mergeText(children)});
   }
   if (spec.show.has('table')) {
     for (const table of resultsTables(block)) nodes.push({...table, position});
@@ -33,4 +41,15 @@ export function blockNodes(code: Code, block: InterpretedBlock, chart: {alt: str
     });
   }
   return nodes;
+}
+
+/** Adjacent text segments (upright symbols) as one node, as Markdown would parse them. */
+function mergeText(children: PhrasingContent[]): PhrasingContent[] {
+  const merged: PhrasingContent[] = [];
+  for (const child of children) {
+    const previous = merged.at(-1);
+    if (child.type === 'text' && previous?.type === 'text') merged[merged.length - 1] = {...previous, value: previous.value + child.value};
+    else merged.push(child);
+  }
+  return merged;
 }

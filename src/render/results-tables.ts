@@ -1,8 +1,9 @@
 import type {PhrasingContent, Table, TableRow} from 'mdast';
 import {blockNumbers, type BlockNumbers} from '../interpret/block-numbers.js';
-import {formatFixed, formatP, formatUnitBounded} from '../interpret/format-number.js';
+import {styleNamed} from '../interpret/number-style.js';
 import type {InterpretedBlock} from '../interpret/result-record.js';
 import {capitalize, effectNames} from '../interpret/wording.js';
+import {markedPhrasing} from './marked-phrasing.js';
 
 /**
  * GFM tables of a block: descriptives per group (numeric outcomes) or the
@@ -11,9 +12,10 @@ import {capitalize, effectNames} from '../interpret/wording.js';
  */
 export function resultsTables(block: InterpretedBlock): Table[] {
   const numbers = blockNumbers(block.computed, block.result.p_adjusted ?? block.result.p);
-  return [descriptivesTable(block, numbers), countsTable(block), testTable(block, numbers), posthocTable(block, numbers)].filter(
-    (t): t is Table => t !== undefined,
-  );
+  const italic = styleNamed(block.computed.spec.style).italicSymbols;
+  return [descriptivesTable(block, numbers), countsTable(block, numbers), testTable(block, numbers), posthocTable(block, numbers)]
+    .filter((t): t is Table => t !== undefined)
+    .map((t) => withPhrasing(t, italic));
 }
 
 function descriptivesTable(block: InterpretedBlock, numbers: BlockNumbers): Table | undefined {
@@ -22,6 +24,7 @@ function descriptivesTable(block: InterpretedBlock, numbers: BlockNumbers): Tabl
   if (entries.length === 0) return undefined;
   const d = numbers.summaryDecimals;
   const r = numbers.recordedDecimals;
+  const formatFixed = numbers.format.fixed;
   const unit = computed.units && computed.design.kind !== 'bivariate' ? ` (${computed.units})` : '';
   const header = computed.design.kind === 'paired' || computed.design.kind === 'bivariate' ? 'Variable' : computed.spec.by ?? 'Sample';
   return table(
@@ -30,8 +33,9 @@ function descriptivesTable(block: InterpretedBlock, numbers: BlockNumbers): Tabl
   );
 }
 
-function countsTable(block: InterpretedBlock): Table | undefined {
+function countsTable(block: InterpretedBlock, numbers: BlockNumbers): Table | undefined {
   const {design, spec} = block.computed;
+  const {fixed: formatFixed, bounded: formatUnitBounded} = numbers.format;
   if (design.kind === 'contingency') {
     return table([`${spec.y} \\ ${spec.by}`, ...design.columns], design.rows.map((row, i) => [row, ...design.counts[i]!.map(String)]));
   }
@@ -53,11 +57,11 @@ function testTable(block: InterpretedBlock, numbers: BlockNumbers): Table | unde
   const {result, computed} = block;
   if (result.p === undefined) return undefined;
   const p = (value: number) => {
-    const {relation, text} = formatP(value, result.alpha);
+    const {relation, text} = numbers.format.p(value, result.alpha);
     return relation === '=' ? text : `${relation} ${text}`;
   };
   const level = `${Math.round(computed.spec.confidence * 1000) / 10}% CI`;
-  const alpha = formatUnitBounded(result.alpha!, 3).replace(/0+$/, '');
+  const alpha = numbers.alpha;
   const adjusted = result.p_adjusted != null;
   const columns: [string, string][] = [
     ['Test', result.title],
@@ -80,6 +84,7 @@ function posthocTable(block: InterpretedBlock, numbers: BlockNumbers): Table | u
   if (!comparisons?.length) return undefined;
   const level = `${Math.round(block.computed.spec.confidence * 1000) / 10}% CI`;
   const d = numbers.estimateDecimals;
+  const {fixed: formatFixed, p: formatP} = numbers.format;
   return table(
     ['Comparison', 'Difference', `Simultaneous ${level}`, 'Adjusted p'],
     comparisons.map((c) => {
@@ -99,4 +104,18 @@ function table(header: readonly string[], rows: readonly (readonly string[])[]):
 
 function text(value: string): PhrasingContent {
   return {type: 'text', value};
+}
+
+/** Cells hold marked symbols (`t(24.6) = 2.91`): set them as the style asks. */
+function withPhrasing(t: Table, italic: boolean): Table {
+  return {
+    ...t,
+    children: t.children.map((row) => ({
+      ...row,
+      children: row.children.map((cell) => ({
+        ...cell,
+        children: cell.children.flatMap((child) => (child.type === 'text' ? markedPhrasing(child.value, italic) : [child])),
+      })),
+    })),
+  };
 }
