@@ -89,10 +89,11 @@ export function blockNumbers(block: ComputedBlock, pForDecision: number | undefi
  * differences), printed as the style prints bounded quantities.
  */
 export function boundedScale(block: ComputedBlock): boolean {
-  const estimate = block.outcome?.estimate;
-  return estimate !== undefined && estimate.units === undefined && Math.abs(estimate.value) <= 1 && block.question !== 'difference'
-    && block.question !== 'equivalence';
+  return block.outcome?.estimate !== undefined && boundedMethods.has(block.spec.method);
 }
+
+/** Methods whose estimate is a correlation, a proportion or a difference of proportions. */
+const boundedMethods = new Set(['pearson', 'spearman', 'kendall', 'binomial', 'one-proportion', 'two-proportion', 'mcnemar']);
 
 /** `g = 1.25, 95% CI [0.31, 2.17]`; bounded effects (r, V, η²) as the style prints them. */
 function effectText(effect: EffectSize, level: string, format: NumberFormat): string {

@@ -61,7 +61,7 @@ export function writeSentence(block: ComputedBlock, adjustment: Adjustment | und
     const text = `${effectNames[effect.name] ?? effect.name} ${numbers.effect.replace(/^[^=]*= /, '= ')}`;
     parts.push(effect.ci ? wording.effect(text) : wording.effectWithoutInterval(text));
   }
-  if (spec.alternative !== 'two-sided') parts.push(alternativeNote(block));
+  if (spec.alternative !== 'two-sided') parts.push(alternativeNote(block, numbers));
   if (adjustment) {
     const name = adjustNames[adjustment.method] ?? adjustment.method;
     parts.push(wording.adjusted(name, adjustment.size, adjustment.family, numbers.format.pClause(adjustment.pAdjusted, spec.alpha, 'adjusted p')));
@@ -92,7 +92,7 @@ function sameAsEstimate(outcome: MethodOutcome): boolean {
   return outcome.estimate !== undefined && outcome.effect !== undefined && outcome.effect.value === outcome.estimate.value;
 }
 
-function alternativeNote(block: ComputedBlock): string {
+function alternativeNote(block: ComputedBlock, numbers: BlockNumbers): string {
   const {spec, design, names} = block;
   const higher = spec.alternative === 'greater';
   const [first = '', second = ''] = names.samples;
@@ -106,15 +106,15 @@ function alternativeNote(block: ComputedBlock): string {
     case 'bivariate':
       return wording.associationAlternative(higher, names.samples[0] ?? '', names.outcome);
     case 'proportion':
-      return wording.proportionAlternative(higher, `the proportion of “${design.success}” than ${spec.mu ?? 0}`);
+      return wording.proportionAlternative(higher, `the proportion of “${design.success}”`, `than ${numbers.format.bounded(spec.mu ?? 0, 2)}`);
     case 'contingency':
       return design.success !== undefined && spec.method === 'two-proportion'
-        ? wording.proportionAlternative(higher, `the proportion of “${design.success}” in ${second} than in ${first}`)
-        : wording.proportionAlternative(higher, `the odds of “${String(block.outcome?.details?.['event'] ?? '')}” in ${second} than in ${first}`);
+        ? wording.proportionAlternative(higher, `the proportion of “${design.success}”`, `in ${second} than in ${first}`)
+        : wording.proportionAlternative(higher, `the odds of “${String(block.outcome?.details?.['event'] ?? '')}”`, `in ${second} than in ${first}`);
     case 'paired-categorical':
-      return wording.proportionAlternative(higher, `the proportion of “${design.levels[1]}” at ${second} than at ${first}`);
+      return wording.proportionAlternative(higher, `the proportion of “${design.levels[1]}”`, `at ${second} than at ${first}`);
     default:
-      return wording.proportionAlternative(higher, 'the statistic');
+      return wording.proportionAlternative(higher, 'the statistic', 'than under the null hypothesis');
   }
 }
 

@@ -77,7 +77,7 @@ export const wording = {
     pairedProportions: (first: string, second: string) => ({
       contrast: `change between ${first} and ${second}`,
       nullHypothesis: 'equal proportions at both measurements',
-      claim: 'the proportions are the same at both measurements',
+      claim: 'the proportions at both measurements are equal',
     }),
     fit: (y: string) => ({
       contrast: `departure of ${y} from the expected proportions`,
@@ -112,11 +112,11 @@ export const wording = {
   shiftEstimate: (outcome: string, amount: string, direction: Direction, second: string, first: string) =>
     direction === 'none'
       ? `typical ${outcome} in ${second} and ${first} matched to the reported precision (Hodges–Lehmann shift)`
-      : `${outcome} was typically ${amount} ${direction} in ${second} than in ${first} (Hodges–Lehmann shift)`,
+      : `the Hodges–Lehmann shift put ${outcome} ${amount} ${direction} in ${second} than in ${first}`,
   pairedShiftEstimate: (amount: string, direction: Direction, second: string, first: string) =>
     direction === 'none'
       ? `${second} and ${first} typically matched within pairs to the reported precision (Hodges–Lehmann estimate)`
-      : `${second} was typically ${amount} ${direction} than ${first} within pairs (Hodges–Lehmann estimate)`,
+      : `the Hodges–Lehmann estimate put ${second} ${amount} ${direction} than ${first} within pairs`,
   medianDifferenceEstimate: (amount: string, direction: Direction, second: string, first: string) =>
     direction === 'none'
       ? `the median difference within pairs was zero to the reported precision`
@@ -124,8 +124,9 @@ export const wording = {
   largestGapEstimate: (outcome: string, amount: string, direction: Direction, high: string, low: string, ranks: boolean) =>
     direction === 'none'
       ? `${ranks ? 'typical' : 'mean'} ${outcome} of the groups matched to the reported precision`
-      : `the largest gap was between ${high} and ${low}: ${ranks ? '' : 'mean '}${outcome} was ${ranks ? 'typically ' : ''}${amount} ${direction} in ${high} than in ${low}` +
-        (ranks ? ' (Hodges–Lehmann shift)' : ''),
+      : ranks
+        ? `the largest gap was between ${high} and ${low}: the Hodges–Lehmann shift put ${outcome} ${amount} ${direction} in ${high} than in ${low}`
+        : `the largest gap was between ${high} and ${low}: mean ${outcome} was ${amount} ${direction} in ${high} than in ${low}`,
   correlationEstimate: (symbolName: string, value: string, direction: Direction, x: string, y: string) =>
     direction === 'none'
       ? `${symbolName} was ${value}, too close to zero to give a direction at this precision`
@@ -141,7 +142,7 @@ export const wording = {
   twoProportionEstimate: (success: string, amount: string, direction: Direction, second: string, first: string, p2: string, p1: string) =>
     direction === 'none'
       ? `the proportion of “${success}” in ${second} and ${first} matched to the reported precision (${p2} and ${p1})`
-      : `the proportion of “${success}” was ${amount} ${direction} in ${second} (${p2}) than in ${first} (${p1})`,
+      : `the proportion of “${success}” was ${p2} in ${second} and ${p1} in ${first}, ${amount} ${direction} in ${second}`,
   pairedProportionEstimate: (level: string, amount: string, direction: Direction, second: string, first: string) =>
     direction === 'none'
       ? `the proportion of “${level}” at ${second} and at ${first} matched to the reported precision`
@@ -158,8 +159,8 @@ export const wording = {
     `One-sided test: the alternative hypothesis is that ${outcome} is ${higher ? 'above' : 'below'} ${mu}.`,
   associationAlternative: (higher: boolean, x: string, y: string) =>
     `One-sided test: the alternative hypothesis is that higher ${x} goes with ${higher ? 'higher' : 'lower'} ${y}.`,
-  proportionAlternative: (higher: boolean, subject: string) =>
-    `One-sided test: the alternative hypothesis is that ${subject} is ${higher ? 'higher' : 'lower'}.`,
+  proportionAlternative: (higher: boolean, subject: string, comparison: string) =>
+    `One-sided test: the alternative hypothesis is that ${subject} is ${higher ? 'higher' : 'lower'} ${comparison}.`,
 
   significant: (test: string, contrast: string, alpha: string, stats: string, nullHypothesis: string) =>
     `${testSubject(test)} found a statistically significant ${contrast} at the pre-declared α = ${alpha} ` +

@@ -51,7 +51,7 @@ export function twoProportionSensitivity(input: TwoProportionSensitivityInput): 
   }
   const detectable = twoProportionDetectable(base, direction, 0.8);
   if (detectable === null) {
-    warnings.push(`No difference in proportions from the first group’s ${p1} reaches 80% power with groups of ${n1} and ${n2}, so no sensitivity is reported.`);
+    warnings.push(`With groups of ${n1} and ${n2} and the first group’s proportion at ${p1}, not even the largest possible change reaches 80% power, so no sensitivity is reported.`);
     return {sensitivity: undefined, baseline: undefined, warnings};
   }
   return {sensitivity: {power_at_smallest_effect: power, min_detectable_effect_80: detectable}, baseline: p1, warnings};
