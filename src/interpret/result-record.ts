@@ -2,6 +2,7 @@ import type {BlockResult} from '../compute/block-result.js';
 import type {ComputedBlock} from '../compute/compute-block.js';
 import {blockNumbers} from './block-numbers.js';
 import {writeSentence, type Adjustment} from './sentence.js';
+import {methodNote} from './wording.js';
 import {plainText, segmentsOf, type SentenceSegment} from './symbol-marks.js';
 
 /**
@@ -22,7 +23,7 @@ export function interpretBlock(block: ComputedBlock, adjustment: Adjustment | un
   const marked = writeSentence(block, adjustment);
   const sentence = plainText(marked);
   const segments = segmentsOf(marked);
-  const compact = blockNumbers(block, adjustment?.pAdjusted ?? outcome?.p).compact;
+  const {compact, format} = blockNumbers(block, adjustment?.pAdjusted ?? outcome?.p);
   const n = block.rows.used;
   const base = {
     method: spec.method,
@@ -33,7 +34,7 @@ export function interpretBlock(block: ComputedBlock, adjustment: Adjustment | un
     groups: block.groups,
     assumptions: outcome?.assumptions ?? [],
     sentence,
-    warnings: outcome?.warnings ?? [],
+    warnings: (outcome?.warnings ?? []).map((note) => plainText(methodNote(note, format))),
     rows: block.rows,
   };
   if (!outcome) return {result: base, segments, compact, computed: block};

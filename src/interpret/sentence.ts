@@ -4,7 +4,7 @@ import {blockNumbers, type BlockNumbers} from './block-numbers.js';
 import {estimateStatement} from './estimate-statement.js';
 import {formatPercent} from './format-number.js';
 import {declared, meanMethods, questionPhrases, type QuestionPhrases} from './question-phrases.js';
-import {adjustNames, effectNames, wording} from './wording.js';
+import {adjustNames, effectNames, methodNote, wording} from './wording.js';
 
 /**
  * The interpretive sentence of a block (contract §7). Which statements
@@ -69,7 +69,7 @@ export function writeSentence(block: ComputedBlock, adjustment: Adjustment | und
   parts.push(...posthocStatement(block, numbers, alpha));
   if (block.question !== 'equivalence') parts.push(...smallestEffectStatement(block, numbers, phrases, significant));
   parts.push(...assumptionNotes(block, numbers));
-  parts.push(...(outcome.warnings ?? []));
+  parts.push(...(outcome.warnings ?? []).map((note) => methodNote(note, numbers.format)));
   const smallest = Math.min(...samplesOf(block.design).map((s) => s.values.length));
   if (Number.isFinite(smallest) && smallest < 10 && meanMethods.has(spec.method)) parts.push(wording.smallSample(smallest));
   const spearman = outcome.details?.['spearman'] as {rho: number; p: number} | undefined;

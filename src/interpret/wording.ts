@@ -1,3 +1,5 @@
+import type {MethodNote} from '../methods/types.js';
+import type {NumberFormat} from './format-number.js';
 import {symbol} from './symbol-marks.js';
 
 /**
@@ -225,6 +227,54 @@ export const wording = {
 } as const;
 
 export type Direction = 'higher' | 'lower' | 'none';
+
+const percentOf = (level: number) => `${Math.round(level * 1000) / 10}%`;
+const listOf = (names: readonly string[]) => names.join(', ');
+
+/** A method's caveat (`MethodNote`), in words; numbers in the report's style. */
+export function methodNote(note: MethodNote, format: NumberFormat): string {
+  switch (note.kind) {
+    case 'spread-ratio':
+      return `The standard deviations of ${note.larger} and ${note.smaller} differ by a factor of ${format.fixed(note.ratio, 1)}; ` +
+        `this test assumes equal spreads, so consider declaring \`test: ${note.alternative}\`.`;
+    case 'small-expected':
+      return `${note.below} of ${note.cells} expected counts are below 5 (smallest ${format.fixed(note.smallest, note.smallest < 1 ? 2 : 1)}), ` +
+        `so the chi-square approximation may be inaccurate; ` +
+        (note.alternative ? `consider declaring \`test: ${note.alternative}\`, which does not rely on it.` : 'consider combining sparse levels.');
+    case 'small-groups':
+      return `${listOf(note.groups)} ${note.groups.length === 1 ? 'has' : 'have'} fewer than 5 observations; the chi-square approximation is rough there.`;
+    case 'unattainable-interval': {
+      const subject = note.estimate === 'simultaneous shift' ? 'simultaneous interval for the shift' : `interval for the ${note.estimate}`;
+      const between = note.between ? ` between ${note.between[0]} and ${note.between[1]}` : '';
+      const sizes = note.pairs === undefined ? 'With these group sizes' : `With ${note.pairs} pairs`;
+      return `${sizes} no ${subject}${between} reaches ${percentOf(note.confidence)} confidence, so its bounds are infinite.`;
+    }
+    case 'ties-approximation': {
+      const tied = {values: 'Tied values', differences: 'Tied differences', 'zero differences': 'Zero differences'}[note.tied];
+      return `${tied}: the p-value uses the normal approximation with tie and continuity correction, not the exact distribution.`;
+    }
+    case 'dropped-zeros':
+      return `${note.zeros} of ${note.pairs} pairs had a difference ${note.second} − ${note.first} of exactly ${format.fixed(note.mu, Math.min(6, decimalsOf(note.mu)))} ` +
+        `and were dropped from the test${note.wilcoxon ? ' (Wilcoxon’s convention)' : ''}; the estimate uses all pairs.`;
+    case 'few-expected':
+      return `With ${symbol('n')} = ${note.trials} and a null proportion of ${format.bounded(note.mu, Math.max(2, decimalsOf(note.mu)))}, fewer than 5 successes or failures are expected under the null, ` +
+        `so the normal approximation may be inaccurate; the exact \`${note.alternative}\` test does not rely on it.`;
+    case 'constant-groups':
+      return `${listOf(note.groups.map((g) => `“${g}”`))} ${note.groups.length > 1 ? 'are' : 'is'} constant (${symbol('SD')} 0).`;
+    case 'smallest-effect-out-of-range':
+      return `The declared smallest effect (${format.bounded(note.smallest, Math.max(2, decimalsOf(note.smallest)))}) would take the proportion beyond ${note.bound} ` +
+        `from the first group’s ${format.bounded(note.baseline, 3)}, so no power is reported for it.`;
+    case 'no-sensitivity':
+      return `With groups of ${note.n1} and ${note.n2} and the first group’s proportion at ${format.bounded(note.baseline, 3)}, ` +
+        'not even the largest possible change reaches 80% power, so no sensitivity is reported.';
+  }
+}
+
+/** Decimals a declared value was written with. */
+function decimalsOf(value: number): number {
+  const text = String(value);
+  return text.includes('.') ? text.length - text.indexOf('.') - 1 : 0;
+}
 
 /** `Welch's t test` stands alone; `paired t test` takes an article. */
 function testSubject(title: string): string {
