@@ -45,7 +45,7 @@ export function estimateStatement(block: ComputedBlock, numbers: BlockNumbers): 
     case 'pearson':
     case 'spearman':
     case 'kendall':
-      return wording.correlationEstimate(effectNames[outcome.effect?.name ?? ''] ?? 'the correlation', bounded(value), dir, names.samples[0] ?? '', names.outcome);
+      return wording.correlationEstimate(effectNames[outcome.effect?.name ?? ''] ?? wording.correlationFallback, bounded(value), dir, names.samples[0] ?? '', names.outcome);
     case 'linear-regression':
       return wording.slopeEstimate(names.outcome, amount, dir, names.samples[0] ?? '', names.samples.length > 2);
     case 'binomial':

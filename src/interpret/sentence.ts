@@ -96,25 +96,27 @@ function alternativeNote(block: ComputedBlock, numbers: BlockNumbers): string {
   const {spec, design, names} = block;
   const higher = spec.alternative === 'greater';
   const [first = '', second = ''] = names.samples;
+  const {sides} = wording;
+  const subject = meanMethods.has(spec.method) ? sides.mean(names.outcome) : names.outcome;
   switch (design.kind) {
     case 'one-sample':
-      return wording.oneSampleAlternative(meanMethods.has(spec.method) ? `mean ${names.outcome}` : names.outcome, higher, declared(block, spec.mu ?? 0));
+      return wording.oneSampleAlternative(subject, higher, declared(block, spec.mu ?? 0));
     case 'paired':
       return wording.pairedAlternative(higher, second, first);
     case 'two-group':
-      return wording.twoGroupAlternative(meanMethods.has(spec.method) ? `mean ${names.outcome}` : names.outcome, higher, second, first);
+      return wording.twoGroupAlternative(subject, higher, second, first);
     case 'bivariate':
       return wording.associationAlternative(higher, names.samples[0] ?? '', names.outcome);
     case 'proportion':
-      return wording.proportionAlternative(higher, `the proportion of “${design.success}”`, `than ${numbers.format.bounded(spec.mu ?? 0, 2)}`);
+      return wording.proportionAlternative(higher, sides.proportionOf(design.success), sides.than(numbers.format.bounded(spec.mu ?? 0, 2)));
     case 'contingency':
       return design.success !== undefined && spec.method === 'two-proportion'
-        ? wording.proportionAlternative(higher, `the proportion of “${design.success}”`, `in ${second} than in ${first}`)
-        : wording.proportionAlternative(higher, `the odds of “${String(block.outcome?.details?.['event'] ?? '')}”`, `in ${second} than in ${first}`);
+        ? wording.proportionAlternative(higher, sides.proportionOf(design.success), sides.betweenGroups(second, first))
+        : wording.proportionAlternative(higher, sides.oddsOf(String(block.outcome?.details?.['event'] ?? '')), sides.betweenGroups(second, first));
     case 'paired-categorical':
-      return wording.proportionAlternative(higher, `the proportion of “${design.levels[1]}”`, `at ${second} than at ${first}`);
+      return wording.proportionAlternative(higher, sides.proportionOf(design.levels[1]), sides.betweenMeasurements(second, first));
     default:
-      return wording.proportionAlternative(higher, 'the statistic', 'than under the null hypothesis');
+      return wording.proportionAlternative(higher, sides.statistic, sides.thanUnderNull);
   }
 }
 
@@ -195,5 +197,5 @@ function describeSentence(block: ComputedBlock, numbers: BlockNumbers): string {
     return wording.describeAll(outcome, n(g.n), numbers.withUnits(g.mean, d), format.fixed(g.sd, d), format.fixed(g.median, d), format.fixed(g.min, r), format.fixed(g.max, r));
   }
   const parts = entries.map(([label, g]) => wording.describeGroup(label, n(g.n), numbers.withUnits(g.mean, d), format.fixed(g.sd, d)));
-  return wording.describeGroups(outcome, block.names.by || 'column', parts);
+  return wording.describeGroups(outcome, block.names.by || wording.columnFallback, parts);
 }

@@ -149,10 +149,21 @@ export const wording = {
     direction === 'none'
       ? `the proportion of “${level}” at ${second} and at ${first} matched to the reported precision`
       : `the proportion of “${level}” was ${amount} ${direction} at ${second} than at ${first}`,
+  correlationFallback: 'the correlation',
   oddsRatioEstimate: (event: string, ratio: string, second: string, first: string) =>
     `the odds of “${event}” were ${ratio} times as high in ${second} as in ${first}`,
 
-  // One-sided tests name their alternative hypothesis in words.
+  // One-sided tests name their alternative hypothesis in words: what is compared, and with what.
+  sides: {
+    mean: (outcome: string) => `mean ${outcome}`,
+    proportionOf: (level: string) => `the proportion of “${level}”`,
+    oddsOf: (level: string) => `the odds of “${level}”`,
+    than: (value: string) => `than ${value}`,
+    betweenGroups: (second: string, first: string) => `in ${second} than in ${first}`,
+    betweenMeasurements: (second: string, first: string) => `at ${second} than at ${first}`,
+    statistic: 'the test statistic',
+    thanUnderNull: 'than under the null hypothesis',
+  },
   twoGroupAlternative: (outcome: string, higher: boolean, second: string, first: string) =>
     `One-sided test: the alternative hypothesis is that ${outcome} is ${higher ? 'higher' : 'lower'} in ${second} than in ${first}.`,
   pairedAlternative: (higher: boolean, second: string, first: string) =>
@@ -205,7 +216,7 @@ export const wording = {
     `This does not show that ${claim}: with these data, only a difference of about ${amount} or more would have been detected with 80% power.`,
 
   smallestEffectInside: (smallest: string) =>
-    `Although statistically significant, the difference is smaller than the smallest effect of interest: the whole interval lies within ±${smallest}.`,
+    `Although statistically significant, the difference is smaller than the ${smallest} declared as the smallest effect of interest: the whole interval lies within ±${smallest}.`,
   smallestEffectBeyond: (smallest: string) =>
     `The whole interval lies beyond the smallest effect of interest (${smallest}).`,
   smallestEffectStraddles: (smallest: string) =>
@@ -220,6 +231,7 @@ export const wording = {
   describeAll: (outcome: string, n: string, mean: string, sd: string, median: string, min: string, max: string) =>
     `${capitalize(outcome)} (${symbol('n')} = ${n}): mean ${mean}, ${symbol('SD')} ${sd}, median ${median}, range ${min} to ${max}.`,
   describeGroup: (label: string, n: string, mean: string, sd: string) => `${label} (${symbol('n')} = ${n}): mean ${mean}, ${symbol('SD')} ${sd}`,
+  columnFallback: 'column',
   describeGroups: (outcome: string, by: string, parts: readonly string[]) =>
     `${capitalize(outcome)} by ${by}: ${parts.join('; ')}.`,
 

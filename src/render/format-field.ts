@@ -32,7 +32,7 @@ export function formatField(block: InterpretedBlock, path: readonly string[]): s
       if (rest.length === 0) return numbers.statistic;
       return typeof value === 'number' ? format.fixed(value, 2) : String(value);
     case 'estimate':
-      if (rest.length === 0) return `${numbers.withUnits(result.estimate!.value)}, ${numbers.estimateCi}`;
+      if (rest.length === 0) return `${numbers.estimateText(result.estimate!.value)}, ${numbers.estimateCi}`;
       return formatLeaf(value, rest, numbers.estimateDecimals, format);
     case 'effect':
       if (rest.length === 0) return numbers.effect;

@@ -71,7 +71,7 @@ function testTable(block: InterpretedBlock, numbers: BlockNumbers): Table | unde
   if (adjusted) columns.push(['Adjusted p', p(result.p_adjusted!)]);
   columns.push([`Decision (α = ${alpha})`, result.decision === 'reject' ? 'reject H₀' : 'fail to reject H₀']);
   if (result.estimate) {
-    columns.push([`${capitalize(result.estimate.name)} [${level}]`, `${numbers.withUnits(result.estimate.value)} ${numbers.estimateCi.replace(/^.*CI /, '')}`]);
+    columns.push([`${capitalize(result.estimate.name)} [${level}]`, `${numbers.estimateText(result.estimate.value)} ${numbers.estimateCi.replace(/^.*CI /, '')}`]);
   }
   if (result.effect && numbers.effect) {
     columns.push([`${capitalize(effectNames[result.effect.name] ?? result.effect.name)} [${level}]`, numbers.effect.replace(/^[^=]*= /, '').replace(/, [\d.]+% CI /, ' ')]);
