@@ -77,6 +77,13 @@ function runMethod(definition: MethodDefinition, design: Design, spec: BlockSpec
   };
   try {
     const outcome = definition.compute(design, options);
+    // A constant sample leaves some statistics undefined (0/0); no sentence may print p = NaN.
+    if (!Number.isFinite(outcome.p) || Number.isNaN(outcome.statistic.value)) {
+      throw new MethodError(
+        `\`${spec.method}\` cannot be computed for these data: its statistic divides by a spread of zero.`,
+        'Check for a constant group or constant differences (a `where` filter, a column of one repeated value).',
+      );
+    }
     const posthoc = outcome.posthoc ?? runPosthoc(spec.method, design, options);
     const assumptions = [...(outcome.assumptions ?? []), ...assumptionChecks(spec.method, design)];
     return {...outcome, ...(posthoc ? {posthoc} : {}), assumptions};

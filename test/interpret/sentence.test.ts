@@ -161,7 +161,6 @@ function run(c: Case): Variant[] | undefined {
     throw error;
   }
   const outcome = computed.outcome;
-  if (outcome && !Number.isFinite(outcome.p)) return undefined;
   const random = generator(c.seed + 1);
   return Array.from({length: variants}, (_, v) => {
     const variant: Case = v === 0 ? c : {
@@ -266,7 +265,7 @@ describe('every sentence carries the elements of contract §7 and none of its fo
           fc.property(caseOf(method), (c) => {
             total++;
             const results = run(c);
-            // Unusable data (a clear UserError) or no finite p on degenerate data (a method's own bug).
+            // Data the method cannot use end in a clear UserError, not a sentence.
             if (!results) return;
             usable++;
             for (const result of results) {
@@ -285,4 +284,18 @@ describe('every sentence carries the elements of contract §7 and none of its fo
 
 afterAll(() => {
   console.log(`sentence property: ${checked} sentences checked (${variants} per usable case) of ${total} random cases in ${((Date.now() - started) / 1000).toFixed(1)} s`);
+});
+
+describe('degenerate data', () => {
+  it('ends in a clear error, never in a sentence with p = NaN', () => {
+    const c: Case = {method: 'welch-t', rows: 6, seed: 1, spread: 0, decimals: 0, scale: 1, ties: false, alpha: 0.05, alternative: 'two-sided', smallest: undefined, family: 1, adjust: 'none', style: 'science'};
+    const settings = {...defaultSettings};
+    const place = {line: 1, column: 1};
+    const spec = parseBlock(blockText(c, 'b0'), place, place, settings);
+    const data = dataset(c);
+    const constant = new Map(data.columns);
+    const zeros = new Float64Array(6);
+    constant.set('y', {kind: 'number', name: 'y', values: zeros, missing: new Uint8Array(6), offset: 0, centred: zeros});
+    expect(() => computeBlock(spec, {...data, columns: constant}, new Uint8Array(6).fill(1))).toThrow(/cannot be computed for these data/);
+  });
 });
