@@ -288,9 +288,9 @@ function decimalsOf(value: number): number {
   return text.includes('.') ? text.length - text.indexOf('.') - 1 : 0;
 }
 
-/** `Welch's t test` stands alone; `paired t test` takes an article. */
+/** A possessive name stands alone (`Welch’s t test`); others take an article (`The Kruskal–Wallis test`). */
 function testSubject(title: string): string {
-  return /^[A-Z]/.test(title) ? title : `The ${title}`;
+  return /^\S+[’']s\b/.test(title) ? title : `The ${title}`;
 }
 
 /** Upper-cases a leading Latin letter only: `ω²` and `ρ` are symbols, not words. */
