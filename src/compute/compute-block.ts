@@ -8,7 +8,7 @@ import type {BlockSpec} from '../spec/block-spec.js';
 import {UserError} from '../user-error.js';
 import {assumptionChecks} from './assumption-checks.js';
 import type {RowAccount} from './block-result.js';
-import {chooseMethod} from './choose-method.js';
+import {chooseMethod, type AutoReason} from './choose-method.js';
 import {prepareDesign} from './prepare-design.js';
 import {runPosthoc} from './run-posthoc.js';
 
@@ -19,7 +19,7 @@ export interface ComputedBlock {
   readonly title: string;
   readonly question: Question | 'description';
   /** Why `auto` chose this method, when it did. */
-  readonly autoReason: string | undefined;
+  readonly autoReason: AutoReason | undefined;
   readonly design: Design;
   readonly outcome: MethodOutcome | undefined;
   readonly groups: Readonly<Record<string, Summary>>;

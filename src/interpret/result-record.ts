@@ -2,7 +2,7 @@ import type {BlockResult} from '../compute/block-result.js';
 import type {ComputedBlock} from '../compute/compute-block.js';
 import {blockNumbers} from './block-numbers.js';
 import {writeSentence, type Adjustment} from './sentence.js';
-import {methodNote} from './wording.js';
+import {methodNote, wording} from './wording.js';
 import {plainText, segmentsOf, type SentenceSegment} from './symbol-marks.js';
 
 /**
@@ -28,7 +28,7 @@ export function interpretBlock(block: ComputedBlock, adjustment: Adjustment | un
   const base = {
     method: spec.method,
     title: block.title,
-    ...(block.autoReason ? {auto: {reason: block.autoReason}} : {}),
+    ...(block.autoReason ? {auto: {reason: wording.autoReason(block.autoReason)}} : {}),
     data: spec.data,
     n,
     groups: block.groups,

@@ -29,7 +29,6 @@ const rankAlternatives: Record<string, string> = {
   'welch-t': 'mann-whitney',
   'paired-t': 'wilcoxon-signed-rank',
   'one-sample-t': 'sign-test',
-  tost: 'mann-whitney',
   anova: 'kruskal-wallis',
   'welch-anova': 'kruskal-wallis',
 };
@@ -74,7 +73,7 @@ export function writeSentence(block: ComputedBlock, adjustment: Adjustment | und
   if (Number.isFinite(smallest) && smallest < 10 && meanMethods.has(spec.method)) parts.push(wording.smallSample(smallest));
   const spearman = outcome.details?.['spearman'] as {rho: number; p: number} | undefined;
   if (spearman) parts.push(wording.spearmanBeside(numbers.format.bounded(spearman.rho, 2), numbers.format.pClause(spearman.p)));
-  if (block.autoReason) parts.push(wording.autoChoice(block.autoReason));
+  if (block.autoReason) parts.push(wording.autoChoice(wording.autoReason(block.autoReason)));
   return parts.join(' ');
 }
 

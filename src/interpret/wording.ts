@@ -1,3 +1,4 @@
+import type {AutoReason} from '../compute/choose-method.js';
 import type {MethodNote} from '../methods/types.js';
 import type {NumberFormat} from './format-number.js';
 import {symbol} from './symbol-marks.js';
@@ -206,6 +207,31 @@ export const wording = {
     `Levene’s check suggests unequal spreads (${symbol('F')} = ${statistic}, ${p}); ${test} assumes equal spreads, so consider declaring \`test: ${alternative}\`.`,
   spearmanBeside: (rho: string, p: string) => `Spearman’s rank correlation, reported beside it, was ${symbol('ρ')} = ${rho} (${p}).`,
   autoChoice: (reason: string) => `The test was chosen from the declared design: ${reason}.`,
+  /** Why `test: auto` chose its method (`AutoReason` in compute/choose-method.ts). */
+  autoReason: (reason: AutoReason): string => {
+    switch (reason.design) {
+      case 'paired-numeric':
+        return 'y lists two numeric measurements of the same rows (paired design)';
+      case 'paired-categorical':
+        return 'y lists two categorical measurements of the same rows (paired design)';
+      case 'numeric-pair':
+        return 'x and y are both numeric (Spearman’s rho is reported beside it)';
+      case 'numeric-predictors':
+        return 'y is numeric with several numeric predictors';
+      case 'two-groups':
+        return 'a numeric outcome in two independent groups (Welch’s test does not assume equal spreads)';
+      case 'k-groups':
+        return `a numeric outcome in ${reason.groups ?? 'several'} independent groups (Welch’s ANOVA does not assume equal spreads; Games–Howell comparisons)`;
+      case 'sparse-2x2':
+        return 'two categorical columns forming a 2×2 table with an expected count below 5';
+      case 'two-categorical':
+        return 'two categorical columns (test of independence)';
+      case 'one-sample':
+        return 'one numeric sample compared with `mu`';
+      case 'one-proportion':
+        return 'one categorical sample: successes out of trials compared with `mu` (exact test)';
+    }
+  },
   variant: (variant: string) => `The p-value is from the ${variant}.`,
   effect: (effect: string) => `The standardized effect was ${effect}.`,
   effectWithoutInterval: (effect: string) => `The standardized effect was ${effect}; no interval is established for it.`,

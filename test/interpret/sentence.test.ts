@@ -196,6 +196,8 @@ function check(c: Case, block: ComputedBlock, sentence: string, pAdjusted: numbe
   if (outcome.p < 0.001) expect(p![0].slice(0, -1), why).toBe(`p < ${format.bounded(0.001, 3)}`);
   expect(p![2], why).toMatch(c.style === 'science' ? /^\.\d{3,6}$/ : /^0\.\d{3,6}$/);
   expect(sentence, why).toContain(`α = ${format.alpha(spec.alpha)}`);
+  // The engineering style keeps every leading zero: no `.45`, `−.45`, `[.12`.
+  if (c.style === 'engineering') expect(sentence, why).not.toMatch(/(?<![\d\p{L}])\.\d/u);
   // Estimate with its interval, effect with its interval.
   if (outcome.estimate) expect(sentence, why).toMatch(/\d+(\.\d+)?% CI \[/);
   const effect = outcome.effect;
