@@ -13,12 +13,6 @@ import {symbol} from './symbol-marks.js';
  * probability that a hypothesis is true.
  */
 export const wording = {
-  // Descriptions of what a design compares.
-  twoGroupContrast: (outcome: string, second: string, first: string) =>
-    `mean ${outcome} between ${second} and ${first}`,
-  pairedContrast: (second: string, first: string) => `${second} and ${first} within pairs`,
-  oneSampleContrast: (outcome: string, mu: string) => `mean ${outcome} from the reference value ${mu}`,
-
   // What each kind of question is about: the contrast tested, the null
   // hypothesis, and the equality a non-significant result must not claim.
   phrases: {
@@ -232,7 +226,6 @@ export const wording = {
         return 'one categorical sample: successes out of trials compared with `mu` (exact test)';
     }
   },
-  variant: (variant: string) => `The p-value is from the ${variant}.`,
   effect: (effect: string) => `The standardized effect was ${effect}.`,
   effectWithoutInterval: (effect: string) => `The standardized effect was ${effect}; no interval is established for it.`,
   doesNotShow: (claim: string) => `This does not show that ${claim}.`,
