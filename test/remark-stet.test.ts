@@ -26,7 +26,7 @@ describe('remarkStet in a unified pipeline of someone else', () => {
     const output = String(await processor().process(file));
     expect(output).not.toContain('```stet');
     expect(output).toMatch(/Welch’s t test detected no statistically significant difference/);
-    expect(output).toMatch(/See p = \.\d{3}\./);
+    expect(output).toMatch(/See \*p\* = \.\d{3}\./);
     expect(file.messages).toEqual([]);
     const data = file.data.stet!;
     expect(data.blocks.get('cmp')?.result.method).toBe('welch-t');

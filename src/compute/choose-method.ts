@@ -12,7 +12,24 @@ import {groupLevels} from './design/group-levels.js';
  */
 export interface MethodChoice {
   readonly method: string;
-  readonly reason: string;
+  /** Why, as data; `interpret/wording.ts` (`autoReason`) words it. */
+  readonly reason: AutoReason;
+}
+
+/** The declared design that decided `auto`, with the number of groups where it matters. */
+export interface AutoReason {
+  readonly design:
+    | 'paired-numeric'
+    | 'paired-categorical'
+    | 'numeric-pair'
+    | 'numeric-predictors'
+    | 'two-groups'
+    | 'k-groups'
+    | 'sparse-2x2'
+    | 'two-categorical'
+    | 'one-sample'
+    | 'one-proportion';
+  readonly groups?: number;
 }
 
 export function chooseMethod(spec: BlockSpec, dataset: Dataset, keep: Uint8Array): MethodChoice {
@@ -20,32 +37,32 @@ export function chooseMethod(spec: BlockSpec, dataset: Dataset, keep: Uint8Array
   if (typeof spec.y !== 'string') {
     const both = spec.y.every((name) => numeric(name, 'y'));
     return both
-      ? {method: 'paired-t', reason: 'y lists two numeric measurements of the same rows (paired design)'}
-      : {method: 'mcnemar', reason: 'y lists two categorical measurements of the same rows (paired design)'};
+      ? {method: 'paired-t', reason: {design: 'paired-numeric'}}
+      : {method: 'mcnemar', reason: {design: 'paired-categorical'}};
   }
   const yNumeric = numeric(spec.y, 'y');
   if (spec.x) {
     if (yNumeric && spec.x.every((name) => numeric(name, 'x'))) {
       return spec.x.length === 1
-        ? {method: 'pearson', reason: 'x and y are both numeric (Spearman’s rho is reported beside it)'}
-        : {method: 'linear-regression', reason: 'y is numeric with several numeric predictors'};
+        ? {method: 'pearson', reason: {design: 'numeric-pair'}}
+        : {method: 'linear-regression', reason: {design: 'numeric-predictors'}};
     }
     throw autoError(spec, 'x', 'x and y must both be numeric for an association');
   }
   if (spec.by) {
     const levels = groupLevels(spec, column(spec, 'by', spec.by, dataset), keep).levels.length;
     if (yNumeric) {
-      if (levels === 2) return {method: 'welch-t', reason: 'a numeric outcome in two independent groups (Welch’s test does not assume equal spreads)'};
-      return {method: 'welch-anova', reason: `a numeric outcome in ${levels} independent groups (Welch’s ANOVA does not assume equal spreads; Games–Howell comparisons)`};
+      if (levels === 2) return {method: 'welch-t', reason: {design: 'two-groups'}};
+      return {method: 'welch-anova', reason: {design: 'k-groups', groups: levels}};
     }
     if (levels === 2 && smallExpected2x2(spec, dataset, keep)) {
-      return {method: 'fisher-exact', reason: 'two categorical columns forming a 2×2 table with an expected count below 5'};
+      return {method: 'fisher-exact', reason: {design: 'sparse-2x2'}};
     }
-    return {method: 'chi-square', reason: 'two categorical columns (test of independence)'};
+    return {method: 'chi-square', reason: {design: 'two-categorical'}};
   }
-  if (yNumeric && spec.mu !== undefined) return {method: 'one-sample-t', reason: 'one numeric sample compared with `mu`'};
+  if (yNumeric && spec.mu !== undefined) return {method: 'one-sample-t', reason: {design: 'one-sample'}};
   if (!yNumeric && spec.success !== undefined && spec.mu !== undefined) {
-    return {method: 'binomial', reason: 'one categorical sample: successes out of trials compared with `mu` (exact test)'};
+    return {method: 'binomial', reason: {design: 'one-proportion'}};
   }
   throw autoError(spec, 'test', 'a single column needs `mu` (and `success` for a categorical column), `by` or `x`');
 }

@@ -8,7 +8,7 @@ import type {BlockSpec} from '../spec/block-spec.js';
 import {UserError} from '../user-error.js';
 import {assumptionChecks} from './assumption-checks.js';
 import type {RowAccount} from './block-result.js';
-import {chooseMethod} from './choose-method.js';
+import {chooseMethod, type AutoReason} from './choose-method.js';
 import {prepareDesign} from './prepare-design.js';
 import {runPosthoc} from './run-posthoc.js';
 
@@ -19,7 +19,7 @@ export interface ComputedBlock {
   readonly title: string;
   readonly question: Question | 'description';
   /** Why `auto` chose this method, when it did. */
-  readonly autoReason: string | undefined;
+  readonly autoReason: AutoReason | undefined;
   readonly design: Design;
   readonly outcome: MethodOutcome | undefined;
   readonly groups: Readonly<Record<string, Summary>>;
@@ -77,6 +77,13 @@ function runMethod(definition: MethodDefinition, design: Design, spec: BlockSpec
   };
   try {
     const outcome = definition.compute(design, options);
+    // A constant sample leaves some statistics undefined (0/0); no sentence may print p = NaN.
+    if (!Number.isFinite(outcome.p) || Number.isNaN(outcome.statistic.value)) {
+      throw new MethodError(
+        `\`${spec.method}\` cannot be computed for these data: its statistic divides by a spread of zero.`,
+        'Check for a constant group or constant differences (a `where` filter, a column of one repeated value).',
+      );
+    }
     const posthoc = outcome.posthoc ?? runPosthoc(spec.method, design, options);
     const assumptions = [...(outcome.assumptions ?? []), ...assumptionChecks(spec.method, design)];
     return {...outcome, ...(posthoc ? {posthoc} : {}), assumptions};

@@ -1,22 +1,18 @@
 import {samplesOf, type ComputedBlock} from '../compute/compute-block.js';
-import {
-  decimalsForWidth,
-  formatDf,
-  formatFixed,
-  formatInterval,
-  formatUnitBounded,
-  pClause,
-  recordedDecimals,
-} from './format-number.js';
+import {decimalsForWidth, formatDf, numberFormat, recordedDecimals, type NumberFormat} from './format-number.js';
+import {styleNamed} from './number-style.js';
+import {symbol} from './symbol-marks.js';
 import type {EffectSize} from '../methods/types.js';
 import {effectSymbols, statisticSymbols, unitBoundedEffects, wording} from './wording.js';
 
 /**
- * The block's numbers formatted once, with decimals chosen from the data:
- * summaries one decimal finer than the data were recorded, estimates at the
- * precision that shows their interval's width to two significant digits.
+ * The block's numbers formatted once, in the document's style, with
+ * decimals chosen from the data: summaries one decimal finer than the data
+ * were recorded, estimates at the precision that shows their interval's
+ * width to two significant digits. Symbols are marked (`symbol-marks.ts`).
  */
 export interface BlockNumbers {
+  readonly format: NumberFormat;
   /** Decimals the data were recorded with: for min, max and median. */
   readonly recordedDecimals: number;
   /** One finer than recorded: for means and SDs. */
@@ -24,8 +20,12 @@ export interface BlockNumbers {
   readonly estimateDecimals: number;
   /** `3.1 MPa` */
   withUnits(value: number, decimals?: number): string;
+  /** The estimate's scale: `.45` on bounded scales, `3.1 MPa` in units. */
+  estimateText(value: number): string;
   /** `95% CI [0.8, 5.4]` for the estimate. */
   readonly estimateCi: string;
+  /** The pre-declared alpha: `.05`. */
+  readonly alpha: string;
   /** `t(17.3) = 2.91` */
   readonly statistic: string;
   /** `t(17.3) = 2.91, p = .010` */
@@ -37,36 +37,46 @@ export interface BlockNumbers {
 }
 
 export function blockNumbers(block: ComputedBlock, pForDecision: number | undefined): BlockNumbers {
+  const format = numberFormat(styleNamed(block.spec.style));
   const samples = samplesOf(block.design);
   const recorded = samples.length ? Math.max(...samples.map((sample) => recordedDecimals(sample.values))) : 0;
   const summaryDecimals = Math.min(6, recorded + 1);
   const {outcome, spec} = block;
-  const level = `${Math.round(spec.confidence * 1000) / 10}%`;
+  const level = percentOf(spec.confidence);
   const estimate = outcome?.estimate;
   // Ratios and coefficients keep two decimals at least: `OR = 3 [1, 15]` hides too much.
   const minimum = estimate && estimate.units === undefined && block.question !== 'difference' ? 2 : 0;
   const estimateDecimals = estimate ? Math.max(minimum, decimalsForWidth(intervalWidth(estimate.value, estimate.ci))) : summaryDecimals;
-  const withUnits = (value: number, decimals = estimateDecimals) => unitText(formatFixed(value, decimals), block.units);
+  const withUnits = (value: number, decimals = estimateDecimals) => unitText(format.fixed(value, decimals), block.units);
+  const bounded = boundedScale(block);
+  const estimateText = (value: number) => (bounded ? format.bounded(value, Math.max(2, estimateDecimals)) : withUnits(value));
+  const alpha = format.alpha(spec.alpha);
   if (!outcome) {
     const compact = Object.values(block.groups)
-      .map((g) => `M = ${formatFixed(g.mean, summaryDecimals)}, SD = ${formatFixed(g.sd, summaryDecimals)}, n = ${g.n}`)
+      .map((g) => `${symbol('M')} = ${format.fixed(g.mean, summaryDecimals)}, ${symbol('SD')} = ${format.fixed(g.sd, summaryDecimals)}, ${symbol('n')} = ${format.fixed(g.n, 0)}`)
       .join('; ');
-    return {recordedDecimals: recorded, summaryDecimals, estimateDecimals, withUnits, estimateCi: '', statistic: '', testStatistics: '', effect: '', compact};
+    return {format, recordedDecimals: recorded, summaryDecimals, estimateDecimals, withUnits, estimateText, estimateCi: '', alpha, statistic: '', testStatistics: '', effect: '', compact};
   }
   const df = outcome.df;
-  const dfText = df === null ? '' : typeof df === 'number' ? `(${formatDf(df)})` : `(${df.map(formatDf).join(', ')})`;
-  const statisticSymbol = statisticSymbols[outcome.statistic.name] ?? outcome.statistic.name;
+  const dfText = df === null ? '' : typeof df === 'number' ? `(${formatDf(df, format)})` : `(${df.map((d) => formatDf(d, format)).join(', ')})`;
+  const statisticSymbol = symbol(statisticSymbols[outcome.statistic.name] ?? outcome.statistic.name);
   // Counting statistics (U, V, S, k) are whole numbers and print as such.
   const value = outcome.statistic.value;
-  const statistic = `${statisticSymbol}${dfText} = ${Number.isInteger(value) ? formatFixed(value, 0) : formatFixed(value, 2)}`;
-  const testStatistics = `${statistic}, ${pClause(outcome.p, pForDecision === outcome.p ? spec.alpha : undefined)}`;
-  const effect = outcome.effect ? effectText(outcome.effect, level) : '';
+  const statistic = `${statisticSymbol}${dfText} = ${Number.isInteger(value) ? format.fixed(value, 0) : format.fixed(value, 2)}`;
+  const testStatistics = `${statistic}, ${format.pClause(outcome.p, pForDecision === outcome.p ? spec.alpha : undefined)}`;
+  const effect = outcome.effect ? effectText(outcome.effect, level, format) : '';
+  const estimateCi = estimate
+    ? wording.confidenceInterval(percentOf(estimate.level), bounded ? format.boundedInterval(estimate.ci, Math.max(2, estimateDecimals)) : format.interval(estimate.ci, estimateDecimals))
+    : '';
   return {
+    format,
     recordedDecimals: recorded,
     summaryDecimals,
     estimateDecimals,
     withUnits,
-    estimateCi: estimate ? wording.confidenceInterval(percentOf(estimate.level), boundedScale(block) ? boundedInterval(estimate.ci, Math.max(2, estimateDecimals)) : formatInterval(estimate.ci, estimateDecimals)) : '',
+    estimateText,
+    estimateCi,
+    alpha,
     statistic,
     testStatistics,
     effect,
@@ -76,27 +86,24 @@ export function blockNumbers(block: ComputedBlock, pForDecision: number | undefi
 
 /**
  * Estimates on a scale bounded by 1 (correlations, proportions and their
- * differences) print without a leading zero, as the reporting style asks.
+ * differences), printed as the style prints bounded quantities.
  */
 export function boundedScale(block: ComputedBlock): boolean {
-  const estimate = block.outcome?.estimate;
-  return estimate !== undefined && estimate.units === undefined && Math.abs(estimate.value) <= 1 && block.question !== 'difference'
-    && block.question !== 'equivalence';
+  return block.outcome?.estimate !== undefined && boundedMethods.has(block.spec.method);
 }
 
-function boundedInterval(ci: readonly [number, number], decimals: number): string {
-  return `[${formatUnitBounded(ci[0], decimals)}, ${formatUnitBounded(ci[1], decimals)}]`;
-}
+/** Methods whose estimate is a correlation, a proportion or a difference of proportions. */
+const boundedMethods = new Set(['pearson', 'spearman', 'kendall', 'binomial', 'one-proportion', 'two-proportion', 'mcnemar']);
 
-/** `g = 1.25, 95% CI [0.31, 2.17]`; bounded effects (r, V, η²) without a leading zero. */
-function effectText(effect: EffectSize, level: string): string {
-  const symbol = effectSymbols[effect.name] ?? effect.name;
+/** `g = 1.25, 95% CI [0.31, 2.17]`; bounded effects (r, V, η²) as the style prints them. */
+function effectText(effect: EffectSize, level: string, format: NumberFormat): string {
+  const name = effectSymbols[effect.name] ?? effect.name;
   const bounded = unitBoundedEffects.has(effect.name);
-  const format = (v: number) => (bounded ? formatUnitBounded(v, 2) : formatFixed(v, 2));
+  const show = (v: number) => (bounded ? format.bounded(v, 2) : format.fixed(v, 2));
   const ci = effect.ci && (Number.isFinite(effect.ci[0]) || Number.isFinite(effect.ci[1]))
-    ? `, ${wording.confidenceInterval(level, `[${format(effect.ci[0])}, ${format(effect.ci[1])}]`)}`
+    ? `, ${wording.confidenceInterval(level, `[${show(effect.ci[0])}, ${show(effect.ci[1])}]`)}`
     : '';
-  return `${symbol} = ${format(effect.value)}${ci}`;
+  return `${symbol(name)} = ${show(effect.value)}${ci}`;
 }
 
 export function unitText(number: string, units: string | undefined): string {
@@ -105,7 +112,7 @@ export function unitText(number: string, units: string | undefined): string {
 }
 
 /** `95%`, `90%` (TOST's interval is at 1 − 2α, not at the block's confidence). */
-function percentOf(level: number): string {
+export function percentOf(level: number): string {
   return `${Math.round(level * 1000) / 10}%`;
 }
 

@@ -1,5 +1,6 @@
 import type {ComputedBlock} from '../compute/compute-block.js';
-import {formatFixed, formatUnitBounded, recordedDecimals} from './format-number.js';
+import {numberFormat, recordedDecimals, type NumberFormat} from './format-number.js';
+import {styleNamed} from './number-style.js';
 import {unitText} from './block-numbers.js';
 import {wording} from './wording.js';
 
@@ -43,7 +44,7 @@ export function questionPhrases(block: ComputedBlock): QuestionPhrases {
     case 'counts':
       return p.fit(names.outcome);
     case 'proportion':
-      return p.proportion(design.success, formatUnitBounded(spec.mu ?? 0, Math.max(2, recordedDecimals([spec.mu ?? 0]))));
+      return p.proportion(design.success, formatOf(block).bounded(spec.mu ?? 0, Math.max(2, recordedDecimals([spec.mu ?? 0]))));
     default:
       return {contrast: '', nullHypothesis: '', claim: ''};
   }
@@ -51,5 +52,9 @@ export function questionPhrases(block: ComputedBlock): QuestionPhrases {
 
 /** A value the author declared (mu, smallest effect), as written, with units. */
 export function declared(block: ComputedBlock, value: number): string {
-  return unitText(formatFixed(value, recordedDecimals([value])), block.units);
+  return unitText(formatOf(block).fixed(value, recordedDecimals([value])), block.units);
+}
+
+function formatOf(block: ComputedBlock): NumberFormat {
+  return numberFormat(styleNamed(block.spec.style));
 }

@@ -1,3 +1,8 @@
+import type {AutoReason} from '../compute/choose-method.js';
+import type {MethodNote} from '../methods/types.js';
+import type {NumberFormat} from './format-number.js';
+import {symbol} from './symbol-marks.js';
+
 /**
  * Every phrase stet writes about a result, in one place so a reviewer can
  * read all of it at once (and a translation could replace it). Functions
@@ -8,12 +13,6 @@
  * probability that a hypothesis is true.
  */
 export const wording = {
-  // Descriptions of what a design compares.
-  twoGroupContrast: (outcome: string, second: string, first: string) =>
-    `mean ${outcome} between ${second} and ${first}`,
-  pairedContrast: (second: string, first: string) => `${second} and ${first} within pairs`,
-  oneSampleContrast: (outcome: string, mu: string) => `mean ${outcome} from the reference value ${mu}`,
-
   // What each kind of question is about: the contrast tested, the null
   // hypothesis, and the equality a non-significant result must not claim.
   phrases: {
@@ -75,7 +74,7 @@ export const wording = {
     pairedProportions: (first: string, second: string) => ({
       contrast: `change between ${first} and ${second}`,
       nullHypothesis: 'equal proportions at both measurements',
-      claim: 'the proportions are the same at both measurements',
+      claim: 'the proportions at both measurements are equal',
     }),
     fit: (y: string) => ({
       contrast: `departure of ${y} from the expected proportions`,
@@ -97,25 +96,79 @@ export const wording = {
   // The estimate, in the data's units, with its direction in plain words.
   twoGroupEstimate: (outcome: string, amount: string, direction: Direction, second: string, first: string) =>
     direction === 'none'
-      ? `mean ${outcome} was the same to the reported precision in ${second} and ${first}`
+      ? `mean ${outcome} in ${second} and ${first} matched to the reported precision`
       : `mean ${outcome} was ${amount} ${direction} in ${second} than in ${first}`,
   pairedEstimate: (amount: string, direction: Direction, second: string, first: string) =>
     direction === 'none'
-      ? `${second} and ${first} agreed on average to the reported precision`
+      ? `${second} and ${first} matched on average to the reported precision`
       : `${second} was on average ${amount} ${direction} than ${first} within pairs`,
   oneSampleEstimate: (outcome: string, mean: string, amount: string, direction: Direction, mu: string) =>
     direction === 'none'
-      ? `mean ${outcome} was ${mean}, equal to the reference value ${mu} to the reported precision`
+      ? `mean ${outcome} was ${mean}, matching the reference value ${mu} to the reported precision`
       : `mean ${outcome} was ${mean}, ${amount} ${direction === 'higher' ? 'above' : 'below'} the reference value ${mu}`,
+  shiftEstimate: (outcome: string, amount: string, direction: Direction, second: string, first: string) =>
+    direction === 'none'
+      ? `typical ${outcome} in ${second} and ${first} matched to the reported precision (Hodges–Lehmann shift)`
+      : `the Hodges–Lehmann shift put ${outcome} ${amount} ${direction} in ${second} than in ${first}`,
+  pairedShiftEstimate: (amount: string, direction: Direction, second: string, first: string) =>
+    direction === 'none'
+      ? `${second} and ${first} typically matched within pairs to the reported precision (Hodges–Lehmann estimate)`
+      : `the Hodges–Lehmann estimate put ${second} ${amount} ${direction} than ${first} within pairs`,
+  medianDifferenceEstimate: (amount: string, direction: Direction, second: string, first: string) =>
+    direction === 'none'
+      ? `the median difference within pairs was zero to the reported precision`
+      : `the median difference within pairs was ${amount}, ${second} ${direction} than ${first}`,
+  largestGapEstimate: (outcome: string, amount: string, direction: Direction, high: string, low: string, ranks: boolean) =>
+    direction === 'none'
+      ? `${ranks ? 'typical' : 'mean'} ${outcome} of the groups matched to the reported precision`
+      : ranks
+        ? `the largest gap was between ${high} and ${low}: the Hodges–Lehmann shift put ${outcome} ${amount} ${direction} in ${high} than in ${low}`
+        : `the largest gap was between ${high} and ${low}: mean ${outcome} was ${amount} ${direction} in ${high} than in ${low}`,
+  correlationEstimate: (symbolName: string, value: string, direction: Direction, x: string, y: string) =>
+    direction === 'none'
+      ? `${symbolName} was ${value}, too close to zero to give a direction at this precision`
+      : `higher ${x} went with ${direction} ${y}: ${symbolName} = ${value}`,
+  slopeEstimate: (y: string, amount: string, direction: Direction, x: string, others: boolean) =>
+    direction === 'none'
+      ? `the slope of ${y} on ${x} was zero to the reported precision`
+      : `${y} was ${amount} ${direction} for each unit more of ${x}${others ? ', with the other predictors held fixed' : ''}`,
+  proportionEstimate: (success: string, value: string, amount: string, direction: Direction, mu: string) =>
+    direction === 'none'
+      ? `the proportion of “${success}” was ${value}, matching ${mu} to the reported precision`
+      : `the proportion of “${success}” was ${value}, ${amount} ${direction === 'higher' ? 'above' : 'below'} ${mu}`,
+  twoProportionEstimate: (success: string, amount: string, direction: Direction, second: string, first: string, p2: string, p1: string) =>
+    direction === 'none'
+      ? `the proportion of “${success}” in ${second} and ${first} matched to the reported precision (${p2} and ${p1})`
+      : `the proportion of “${success}” was ${p2} in ${second} and ${p1} in ${first}, ${amount} ${direction} in ${second}`,
+  pairedProportionEstimate: (level: string, amount: string, direction: Direction, second: string, first: string) =>
+    direction === 'none'
+      ? `the proportion of “${level}” at ${second} and at ${first} matched to the reported precision`
+      : `the proportion of “${level}” was ${amount} ${direction} at ${second} than at ${first}`,
+  correlationFallback: 'the correlation',
+  oddsRatioEstimate: (event: string, ratio: string, second: string, first: string) =>
+    `the odds of “${event}” were ${ratio} times as high in ${second} as in ${first}`,
 
-
-  // One-sided tests name their alternative hypothesis in words.
+  // One-sided tests name their alternative hypothesis in words: what is compared, and with what.
+  sides: {
+    mean: (outcome: string) => `mean ${outcome}`,
+    proportionOf: (level: string) => `the proportion of “${level}”`,
+    oddsOf: (level: string) => `the odds of “${level}”`,
+    than: (value: string) => `than ${value}`,
+    betweenGroups: (second: string, first: string) => `in ${second} than in ${first}`,
+    betweenMeasurements: (second: string, first: string) => `at ${second} than at ${first}`,
+    statistic: 'the test statistic',
+    thanUnderNull: 'than under the null hypothesis',
+  },
   twoGroupAlternative: (outcome: string, higher: boolean, second: string, first: string) =>
-    `One-sided test: the alternative hypothesis is that mean ${outcome} is ${higher ? 'higher' : 'lower'} in ${second} than in ${first}.`,
+    `One-sided test: the alternative hypothesis is that ${outcome} is ${higher ? 'higher' : 'lower'} in ${second} than in ${first}.`,
   pairedAlternative: (higher: boolean, second: string, first: string) =>
-    `One-sided test: the alternative hypothesis is that ${second} is ${higher ? 'higher' : 'lower'} than ${first} on average.`,
+    `One-sided test: the alternative hypothesis is that ${second} is ${higher ? 'higher' : 'lower'} than ${first} within pairs.`,
   oneSampleAlternative: (outcome: string, higher: boolean, mu: string) =>
-    `One-sided test: the alternative hypothesis is that mean ${outcome} is ${higher ? 'above' : 'below'} ${mu}.`,
+    `One-sided test: the alternative hypothesis is that ${outcome} is ${higher ? 'above' : 'below'} ${mu}.`,
+  associationAlternative: (higher: boolean, x: string, y: string) =>
+    `One-sided test: the alternative hypothesis is that higher ${x} goes with ${higher ? 'higher' : 'lower'} ${y}.`,
+  proportionAlternative: (higher: boolean, subject: string, comparison: string) =>
+    `One-sided test: the alternative hypothesis is that ${subject} is ${higher ? 'higher' : 'lower'} ${comparison}.`,
 
   significant: (test: string, contrast: string, alpha: string, stats: string, nullHypothesis: string) =>
     `${testSubject(test)} found a statistically significant ${contrast} at the pre-declared α = ${alpha} ` +
@@ -125,7 +178,6 @@ export const wording = {
     `α = ${alpha} (${stats}); the null hypothesis is not rejected.`,
   estimateSignificant: (estimate: string, ci: string) => `${capitalize(estimate)} (${ci}).`,
   estimateNotSignificant: (estimate: string, ci: string) => `In these data, ${estimate} (${ci}).`,
-  genericEstimate: (name: string, value: string) => `the ${name} was ${value}`,
   compatibleValues: (claim: string, ci: string) =>
     `This does not show that ${claim}: the ${ci} shows the values still compatible with the data.`,
   equivalenceContrast: (outcome: string, second: string, first: string) => `mean ${outcome} of ${second} and ${first}`,
@@ -138,39 +190,67 @@ export const wording = {
     `α = ${alpha}: the ${ci} extends beyond ±${margin} (${stats}). This does not show that a difference of ${margin} or more exists.`,
   posthocDiffering: (procedure: string, alpha: string, pairs: readonly string[]) =>
     `Pairs that differ at α = ${alpha} (${procedure}-adjusted): ${pairs.join('; ')}.`,
-  posthocNone: (procedure: string) => `No pair of groups differed significantly after ${procedure} adjustment.`,
+  posthocNone: (procedure: string, alpha: string, pairs: number) =>
+    `After ${procedure} adjustment, none of the ${pairs} pairs of groups differed statistically significantly at α = ${alpha}.`,
   posthocPair: (contrast: string, amount: string, ci: string | undefined, p: string) =>
     `${contrast} = ${amount}${ci ? ` (${ci}, ${p})` : ` (${p})`}`,
   assumptionNormality: (group: string, statistic: string, p: string, alternative: string | undefined) =>
-    `The Shapiro–Wilk check suggests non-normal data${group ? ` in ${group}` : ''} (W = ${statistic}, ${p})` +
+    `The Shapiro–Wilk check suggests non-normal data${group ? ` in ${group}` : ''} (${symbol('W')} = ${statistic}, ${p})` +
     (alternative ? `; with small samples, consider declaring \`test: ${alternative}\`.` : '.'),
   assumptionSpread: (statistic: string, p: string, test: string, alternative: string) =>
-    `Levene’s check suggests unequal spreads (F = ${statistic}, ${p}); ${test} assumes equal spreads, so consider declaring \`test: ${alternative}\`.`,
-  spearmanBeside: (rho: string, p: string) => `Spearman’s rank correlation, reported beside it, was ρ = ${rho} (${p}).`,
+    `Levene’s check suggests unequal spreads (${symbol('F')} = ${statistic}, ${p}); ${test} assumes equal spreads, so consider declaring \`test: ${alternative}\`.`,
+  spearmanBeside: (rho: string, p: string) => `Spearman’s rank correlation, reported beside it, was ${symbol('ρ')} = ${rho} (${p}).`,
   autoChoice: (reason: string) => `The test was chosen from the declared design: ${reason}.`,
-  variant: (variant: string) => `The p-value is from the ${variant}.`,
+  /** Why `test: auto` chose its method (`AutoReason` in compute/choose-method.ts). */
+  autoReason: (reason: AutoReason): string => {
+    switch (reason.design) {
+      case 'paired-numeric':
+        return 'y lists two numeric measurements of the same rows (paired design)';
+      case 'paired-categorical':
+        return 'y lists two categorical measurements of the same rows (paired design)';
+      case 'numeric-pair':
+        return 'x and y are both numeric (Spearman’s rho is reported beside it)';
+      case 'numeric-predictors':
+        return 'y is numeric with several numeric predictors';
+      case 'two-groups':
+        return 'a numeric outcome in two independent groups (Welch’s test does not assume equal spreads)';
+      case 'k-groups':
+        return `a numeric outcome in ${reason.groups ?? 'several'} independent groups (Welch’s ANOVA does not assume equal spreads; Games–Howell comparisons)`;
+      case 'sparse-2x2':
+        return 'two categorical columns forming a 2×2 table with an expected count below 5';
+      case 'two-categorical':
+        return 'two categorical columns (test of independence)';
+      case 'one-sample':
+        return 'one numeric sample compared with `mu`';
+      case 'one-proportion':
+        return 'one categorical sample: successes out of trials compared with `mu` (exact test)';
+    }
+  },
   effect: (effect: string) => `The standardized effect was ${effect}.`,
+  effectWithoutInterval: (effect: string) => `The standardized effect was ${effect}; no interval is established for it.`,
+  doesNotShow: (claim: string) => `This does not show that ${claim}.`,
   powerAtSmallestEffect: (claim: string, power: string, smallest: string) =>
     `This does not show that ${claim}: the test had ${power} power to detect a difference of ${smallest}.`,
   minimumDetectable: (claim: string, amount: string) =>
     `This does not show that ${claim}: with these data, only a difference of about ${amount} or more would have been detected with 80% power.`,
 
   smallestEffectInside: (smallest: string) =>
-    `Although statistically significant, the difference is smaller than the smallest effect of interest: the whole interval lies within ±${smallest}.`,
+    `Although statistically significant, the difference is smaller than the ${smallest} declared as the smallest effect of interest: the whole interval lies within ±${smallest}.`,
   smallestEffectBeyond: (smallest: string) =>
     `The whole interval lies beyond the smallest effect of interest (${smallest}).`,
   smallestEffectStraddles: (smallest: string) =>
     `The interval includes differences both smaller and larger than the smallest effect of interest (${smallest}), so whether the difference matters in practice remains uncertain.`,
 
   adjusted: (method: string, size: number, family: string, p: string) =>
-    `The decision uses the ${method}-adjusted ${p}, across the ${size} tests of family “${family}”.`,
+    `The decision uses the p-value ${method}-adjusted across the ${size} tests of family “${family}” (${p}).`,
 
   smallSample: (n: number) =>
     `With only ${n} observations in the smallest group, the test leans on approximately normal data, which so few observations cannot check.`,
 
   describeAll: (outcome: string, n: string, mean: string, sd: string, median: string, min: string, max: string) =>
-    `${capitalize(outcome)} (n = ${n}): mean ${mean}, SD ${sd}, median ${median}, range ${min} to ${max}.`,
-  describeGroup: (label: string, n: string, mean: string, sd: string) => `${label} (n = ${n}): mean ${mean}, SD ${sd}`,
+    `${capitalize(outcome)} (${symbol('n')} = ${n}): mean ${mean}, ${symbol('SD')} ${sd}, median ${median}, range ${min} to ${max}.`,
+  describeGroup: (label: string, n: string, mean: string, sd: string) => `${label} (${symbol('n')} = ${n}): mean ${mean}, ${symbol('SD')} ${sd}`,
+  columnFallback: 'column',
   describeGroups: (outcome: string, by: string, parts: readonly string[]) =>
     `${capitalize(outcome)} by ${by}: ${parts.join('; ')}.`,
 
@@ -187,9 +267,57 @@ export const wording = {
 
 export type Direction = 'higher' | 'lower' | 'none';
 
-/** `Welch's t test` stands alone; `paired t test` takes an article. */
+const percentOf = (level: number) => `${Math.round(level * 1000) / 10}%`;
+const listOf = (names: readonly string[]) => names.join(', ');
+
+/** A method's caveat (`MethodNote`), in words; numbers in the report's style. */
+export function methodNote(note: MethodNote, format: NumberFormat): string {
+  switch (note.kind) {
+    case 'spread-ratio':
+      return `The standard deviations of ${note.larger} and ${note.smaller} differ by a factor of ${format.fixed(note.ratio, 1)}; ` +
+        `this test assumes equal spreads, so consider declaring \`test: ${note.alternative}\`.`;
+    case 'small-expected':
+      return `${note.below} of ${note.cells} expected counts are below 5 (smallest ${format.fixed(note.smallest, note.smallest < 1 ? 2 : 1)}), ` +
+        `so the chi-square approximation may be inaccurate; ` +
+        (note.alternative ? `consider declaring \`test: ${note.alternative}\`, which does not rely on it.` : 'consider combining sparse levels.');
+    case 'small-groups':
+      return `${listOf(note.groups)} ${note.groups.length === 1 ? 'has' : 'have'} fewer than 5 observations; the chi-square approximation is rough there.`;
+    case 'unattainable-interval': {
+      const subject = note.estimate === 'simultaneous shift' ? 'simultaneous interval for the shift' : `interval for the ${note.estimate}`;
+      const between = note.between ? ` between ${note.between[0]} and ${note.between[1]}` : '';
+      const sizes = note.pairs === undefined ? 'With these group sizes' : `With ${note.pairs} pairs`;
+      return `${sizes} no ${subject}${between} reaches ${percentOf(note.confidence)} confidence, so its bounds are infinite.`;
+    }
+    case 'ties-approximation': {
+      const tied = {values: 'Tied values', differences: 'Tied differences', 'zero differences': 'Zero differences'}[note.tied];
+      return `${tied}: the p-value uses the normal approximation with tie and continuity correction, not the exact distribution.`;
+    }
+    case 'dropped-zeros':
+      return `${note.zeros} of ${note.pairs} pairs had a difference ${note.second} − ${note.first} of exactly ${format.fixed(note.mu, Math.min(6, decimalsOf(note.mu)))} ` +
+        `and were dropped from the test${note.wilcoxon ? ' (Wilcoxon’s convention)' : ''}; the estimate uses all pairs.`;
+    case 'few-expected':
+      return `With ${symbol('n')} = ${note.trials} and a null proportion of ${format.bounded(note.mu, Math.max(2, decimalsOf(note.mu)))}, fewer than 5 successes or failures are expected under the null, ` +
+        `so the normal approximation may be inaccurate; the exact \`${note.alternative}\` test does not rely on it.`;
+    case 'constant-groups':
+      return `${listOf(note.groups.map((g) => `“${g}”`))} ${note.groups.length > 1 ? 'are' : 'is'} constant (${symbol('SD')} 0).`;
+    case 'smallest-effect-out-of-range':
+      return `The declared smallest effect (${format.bounded(note.smallest, Math.max(2, decimalsOf(note.smallest)))}) would take the proportion beyond ${note.bound} ` +
+        `from the first group’s ${format.bounded(note.baseline, 3)}, so no power is reported for it.`;
+    case 'no-sensitivity':
+      return `With groups of ${note.n1} and ${note.n2} and the first group’s proportion at ${format.bounded(note.baseline, 3)}, ` +
+        'not even the largest possible change reaches 80% power, so no sensitivity is reported.';
+  }
+}
+
+/** Decimals a declared value was written with. */
+function decimalsOf(value: number): number {
+  const text = String(value);
+  return text.includes('.') ? text.length - text.indexOf('.') - 1 : 0;
+}
+
+/** A possessive name stands alone (`Welch’s t test`); others take an article (`The Kruskal–Wallis test`). */
 function testSubject(title: string): string {
-  return /^[A-Z]/.test(title) ? title : `The ${title}`;
+  return /^\S+[’']s\b/.test(title) ? title : `The ${title}`;
 }
 
 /** Upper-cases a leading Latin letter only: `ω²` and `ρ` are symbols, not words. */
@@ -225,21 +353,21 @@ export const effectSymbols: Record<string, string> = {
   'r-squared': 'R²',
 };
 
-/** Names of effect sizes in sentences. */
+/** Names of effect sizes in sentences; Latin symbols marked for italics. */
 export const effectNames: Record<string, string> = {
-  'hedges-g': 'Hedges’ g',
+  'hedges-g': `Hedges’ ${symbol('g')}`,
   'rank-biserial': 'the rank-biserial correlation',
-  'eta-squared': 'η²',
-  'omega-squared': 'ω²',
-  'epsilon-squared': 'ε²',
-  'cramers-v': 'Cramér’s V',
-  'cohens-w': 'Cohen’s w',
-  'cohens-h': 'Cohen’s h',
+  'eta-squared': symbol('η²'),
+  'omega-squared': symbol('ω²'),
+  'epsilon-squared': symbol('ε²'),
+  'cramers-v': `Cramér’s ${symbol('V')}`,
+  'cohens-w': `Cohen’s ${symbol('w')}`,
+  'cohens-h': `Cohen’s ${symbol('h')}`,
   'odds-ratio': 'the odds ratio',
-  r: 'r',
-  rho: 'ρ',
-  'tau-b': 'τ_b',
-  'r-squared': 'R²',
+  r: `Pearson’s ${symbol('r')}`,
+  rho: `Spearman’s ${symbol('ρ')}`,
+  'tau-b': `Kendall’s ${symbol('τ_b')}`,
+  'r-squared': symbol('R²'),
   'proportion-positive': 'the proportion of positive differences',
 };
 

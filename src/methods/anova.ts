@@ -76,10 +76,7 @@ export const anova: MethodDefinition<KGroupDesign> = {
         alpha: options.alpha,
         smallestEffect: options.smallestEffect,
       }),
-      warnings: spreadRatioWarning(
-        sums,
-        'the classic one-way ANOVA assumes equal spreads. Consider declaring `test: welch-anova`.',
-      ),
+      warnings: spreadRatioWarning(sums, 'welch-anova'),
       details: {
         anova_table: {
           between: {ss: sums.ssBetween, df: df1, ms: msBetween},

@@ -55,7 +55,7 @@ export const chiSquareGof: MethodDefinition<CountsDesign> = {
     }
     const [lower, upper] = noncentralityInterval(statistic, df, options.confidence);
     const toW = (chi2: number) => Math.sqrt(chi2 / total);
-    const warning = smallExpectedWarning([used.map((i) => expected[i]!)], 'consider combining sparse levels.');
+    const warning = smallExpectedWarning([used.map((i) => expected[i]!)], undefined);
     return {
       statistic: {name: 'χ²', value: statistic},
       df,

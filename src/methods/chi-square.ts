@@ -51,10 +51,7 @@ export const chiSquare: MethodDefinition<ContingencyDesign> = {
     const k = Math.min(rows.length, columns.length);
     const toV = (chi2: number) => Math.sqrt(chi2 / (total * (k - 1)));
     const [lower, upper] = noncentralityInterval(uncorrected, df, options.confidence);
-    const warning = smallExpectedWarning(
-      expected,
-      is2x2 ? 'Fisher’s exact test (`fisher-exact`) does not rely on it.' : 'consider combining sparse levels.',
-    );
+    const warning = smallExpectedWarning(expected, is2x2 ? 'fisher-exact' : undefined);
     return {
       statistic: {name: 'χ²', value: statistic},
       df,

@@ -4,9 +4,8 @@ import {medianOf, orderStatisticInterval, pairwiseDifferences} from './shared/ho
 import {requireGroups, requireTwoSided} from './shared/k-group-checks.js';
 import {midRanks} from './shared/mid-ranks.js';
 import {normalCriticalCount, tieSum} from './shared/normal-tails.js';
-import {percent} from './shared/percent.js';
 import {selectKth} from './shared/select-kth.js';
-import type {Estimate, KGroupDesign, MethodDefinition, MethodOptions, Sample} from './types.js';
+import type {Estimate, KGroupDesign, MethodDefinition, MethodNote, MethodOptions, Sample} from './types.js';
 
 /**
  * The Kruskal–Wallis H test (Kruskal & Wallis 1952, JASA 47:583): all N
@@ -53,17 +52,13 @@ export const kruskalWallis: MethodDefinition<KGroupDesign> = {
     const h = ((12 / (total * (total + 1))) * sum) / correction;
     const k = samples.length;
     const shift = extremeShift(samples, meanRanks, options);
-    const warnings: string[] = [];
+    const warnings: MethodNote[] = [];
     const small = samples.filter((s) => s.values.length < 5).map((s) => s.label);
     if (small.length > 0) {
-      warnings.push(
-        `${small.join(', ')} ${small.length === 1 ? 'has' : 'have'} fewer than 5 observations; the chi-square approximation to H is rough there.`,
-      );
+      warnings.push({kind: 'small-groups', groups: small});
     }
     if (shift.ci[0] === -Infinity) {
-      warnings.push(
-        `With these group sizes no simultaneous interval for the shift reaches ${percent(options.confidence)} confidence, so its bounds are infinite.`,
-      );
+      warnings.push({kind: 'unattainable-interval', confidence: options.confidence, estimate: 'simultaneous shift'});
     }
     return {
       statistic: {name: 'H', value: h},
@@ -101,6 +96,7 @@ function extremeShift(samples: readonly Sample[], meanRanks: readonly number[], 
   const differences = pairwiseDifferences(a.values, b.values);
   const critical = normalCriticalCount(count, sd, alphaTail);
   return {
+    pair: [a.label, b.label],
     name: `Hodges–Lehmann shift (${b.label} - ${a.label})`,
     value: medianOf(differences),
     ci: orderStatisticInterval((i) => selectKth(differences, i), count, critical, 'two-sided'),

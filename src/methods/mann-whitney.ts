@@ -4,11 +4,10 @@ import {medianOf, orderStatisticInterval, pairwiseDifferences} from './shared/ho
 import {mannWhitneyPmf} from './shared/mann-whitney-distribution.js';
 import {midRanks} from './shared/mid-ranks.js';
 import {normalCriticalCount, normalTails, tieSum} from './shared/normal-tails.js';
-import {percent} from './shared/percent.js';
 import {rankBiserial} from './shared/rank-biserial.js';
 import {selectKth} from './shared/select-kth.js';
 import {sidedP, tailAlpha, type Tails} from './shared/sided-p.js';
-import type {MethodDefinition, TwoGroupDesign} from './types.js';
+import type {MethodDefinition, MethodNote, TwoGroupDesign} from './types.js';
 
 /**
  * Mann–Whitney U test, the Wilcoxon rank-sum test (Wilcoxon 1945; Mann &
@@ -83,10 +82,10 @@ export const mannWhitney: MethodDefinition<TwoGroupDesign> = {
     const k = pmf ? exactCriticalCount(pmf, alphaTail) : normalCriticalCount(pairs, untiedSd, alphaTail);
     const differences = pairwiseDifferences(first.values, second.values);
     const ci = orderStatisticInterval((i) => selectKth(differences, i), pairs, k, options.alternative);
-    const warnings: string[] = [];
-    if (k === 0) warnings.push(unattainableWarning(options.confidence, first.label, second.label));
+    const warnings: MethodNote[] = [];
+    if (k === 0) warnings.push({kind: 'unattainable-interval', confidence: options.confidence, estimate: 'shift', between: [first.label, second.label]});
     if (!exact && tieSizes.length > 0 && pairs <= EXACT_MAX_PAIRS) {
-      warnings.push('Tied values: the p-value uses the normal approximation with tie and continuity correction, not the exact distribution.');
+      warnings.push({kind: 'ties-approximation', tied: 'values'});
     }
     const achieved = pmf && k > 0 ? 1 - (options.alternative === 'two-sided' ? 2 : 1) * atMost(pmf, k - 1) : null;
     return {
@@ -118,10 +117,3 @@ export const mannWhitney: MethodDefinition<TwoGroupDesign> = {
     };
   },
 };
-
-function unattainableWarning(confidence: number, a: string, b: string): string {
-  return (
-    `With these group sizes no interval for the shift between ${a} and ${b} reaches ` +
-    `${percent(confidence)} confidence, so its bounds are infinite.`
-  );
-}

@@ -38,7 +38,7 @@ export const oneProportion: MethodDefinition<ProportionDesign> = {
       estimate: {name: `proportion of ${success}`, value: proportion, ci, level: options.confidence},
       effect: {name: 'cohens-h', value: cohensH(proportion, mu), ci: [cohensH(ci[0], mu), cohensH(ci[1], mu)]},
       ...(small
-        ? {warnings: [`With n = ${trials} and mu = ${mu} fewer than 5 successes or failures are expected under the null, so the normal approximation may be inaccurate; the exact \`binomial\` test does not rely on it.`]}
+        ? {warnings: [{kind: 'few-expected' as const, trials, mu, alternative: 'binomial'}]}
         : {}),
       details: {successes, trials, null_proportion: mu},
     };

@@ -2,10 +2,9 @@ import {binomialCdf} from '../distributions/binomial.js';
 import {MethodError} from './method-error.js';
 import {orderStatisticInterval} from './shared/hodges-lehmann.js';
 import {pairedDifferences} from './shared/paired-differences.js';
-import {percent} from './shared/percent.js';
 import {sidedP, tailAlpha} from './shared/sided-p.js';
 import {clopperPearsonInterval} from './shared/clopper-pearson.js';
-import type {MethodDefinition, PairedDesign} from './types.js';
+import type {MethodDefinition, MethodNote, PairedDesign} from './types.js';
 
 /**
  * Sign test on the paired differences `second - first` against a median of
@@ -55,17 +54,12 @@ export const signTest: MethodDefinition<PairedDesign> = {
     const k = binomialCriticalCount(all, alphaTail);
     const ci = orderStatisticInterval((i) => sorted[i - 1]!, all, k, options.alternative);
     const sides = options.alternative === 'two-sided' ? 2 : 1;
-    const warnings: string[] = [];
+    const warnings: MethodNote[] = [];
     if (zeros > 0) {
-      warnings.push(
-        `${zeros} of ${all} pairs had a difference ${second.label} - ${first.label} equal to ${options.mu} ` +
-          'and were dropped from the test; the estimate uses all pairs.',
-      );
+      warnings.push({kind: 'dropped-zeros', zeros, pairs: all, second: second.label, first: first.label, mu: options.mu, wilcoxon: false});
     }
     if (k === 0) {
-      warnings.push(
-        `With ${all} pairs no interval for the median difference reaches ${percent(options.confidence)} confidence, so its bounds are infinite.`,
-      );
+      warnings.push({kind: 'unattainable-interval', confidence: options.confidence, estimate: 'median difference', pairs: all});
     }
     return {
       statistic: {name: 'S', value: positive},

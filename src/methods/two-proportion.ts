@@ -6,7 +6,7 @@ import {newcombeInterval} from './shared/newcombe-interval.js';
 import {arcsine} from './shared/proportion-checks.js';
 import {twoProportionSensitivity} from './shared/two-proportion-sensitivity.js';
 import {zTestP} from './shared/z-test-p.js';
-import type {Alternative, ContingencyDesign, MethodDefinition} from './types.js';
+import type {Alternative, ContingencyDesign, MethodDefinition, MethodNote} from './types.js';
 
 /**
  * The two-proportion z test with the pooled standard error (Fleiss, Levin &
@@ -61,11 +61,11 @@ export const twoProportion: MethodDefinition<ContingencyDesign> = {
     const second = {successes: x2, trials: n2};
     const h = arcsine(p2) - arcsine(p1);
     const expected = [trials.map((n) => n * pooled), trials.map((n) => n * (1 - pooled))];
-    const warning = smallExpectedWarning(expected, 'Fisher’s exact test (`fisher-exact`) does not rely on it.');
+    const warning = smallExpectedWarning(expected, 'fisher-exact');
     const sensitivity = twoProportionSensitivity({p1, n1, n2, alpha: options.alpha, alternative, smallestEffect: options.smallestEffect});
     // Failures above successes, groups in order: R's a·d/(b·c) is then the odds of success in group 2 over group 1.
     const odds = conditionalOddsRatio([[n1 - x1, n2 - x2], [x1, x2]], confidence, alternative);
-    const warnings = [warning, ...sensitivity.warnings].filter((w): w is string => w !== undefined);
+    const warnings = [warning, ...sensitivity.warnings].filter((w): w is MethodNote => w !== undefined);
     return {
       statistic: {name: 'z', value: z},
       df: null,

@@ -145,6 +145,8 @@ export interface Estimate {
   readonly ci: readonly [number, number];
   readonly level: number;
   readonly units?: string;
+  /** k-group tests: the two groups the estimate compares, `[reference, other]` (estimate = other − reference). */
+  readonly pair?: readonly [string, string];
 }
 
 export interface EffectSize {
@@ -183,6 +185,32 @@ export interface PosthocComparison {
   readonly p_adjusted: number;
 }
 
+/**
+ * A caveat a method attaches to its result. Methods return facts, not prose:
+ * every phrase lives in `interpret/wording.ts` (`methodNote`).
+ */
+export type MethodNote =
+  /** Group SDs differ by more than 2× under a test that assumes equal spreads. */
+  | {readonly kind: 'spread-ratio'; readonly larger: string; readonly smaller: string; readonly ratio: number; readonly alternative: string}
+  /** Expected counts below 5 (Cochran 1954); `alternative` is a method id, or absent: combine sparse levels. */
+  | {readonly kind: 'small-expected'; readonly below: number; readonly cells: number; readonly smallest: number; readonly alternative?: string}
+  /** Groups under 5 observations, where a chi-square approximation is rough. */
+  | {readonly kind: 'small-groups'; readonly groups: readonly string[]}
+  /** No interval for the estimate reaches the confidence level: its bounds are infinite. */
+  | {readonly kind: 'unattainable-interval'; readonly confidence: number; readonly estimate: 'shift' | 'simultaneous shift' | 'median difference'; readonly pairs?: number; readonly between?: readonly [string, string]}
+  /** Ties forced the normal approximation where the exact distribution would apply. */
+  | {readonly kind: 'ties-approximation'; readonly tied: 'values' | 'differences' | 'zero differences'}
+  /** Pairs whose difference equals mu, dropped from the test. */
+  | {readonly kind: 'dropped-zeros'; readonly zeros: number; readonly pairs: number; readonly second: string; readonly first: string; readonly mu: number; readonly wilcoxon: boolean}
+  /** Fewer than 5 successes or failures expected under the null. */
+  | {readonly kind: 'few-expected'; readonly trials: number; readonly mu: number; readonly alternative: string}
+  /** Groups with SD 0. */
+  | {readonly kind: 'constant-groups'; readonly groups: readonly string[]}
+  /** The smallest effect would take the second proportion outside [0, 1]. */
+  | {readonly kind: 'smallest-effect-out-of-range'; readonly smallest: number; readonly bound: 0 | 1; readonly baseline: number}
+  /** No attainable difference reaches 80% power. */
+  | {readonly kind: 'no-sensitivity'; readonly baseline: number; readonly n1: number; readonly n2: number};
+
 /** What a method computes; the block stage adds alpha, decision and words. */
 export interface MethodOutcome {
   readonly statistic: Statistic;
@@ -194,7 +222,8 @@ export interface MethodOutcome {
   readonly effect?: EffectSize;
   readonly sensitivity?: Sensitivity;
   readonly assumptions?: readonly AssumptionCheck[];
-  readonly warnings?: readonly string[];
+  /** Caveats as data; `interpret/wording.ts` words them for sentences and JSON. */
+  readonly warnings?: readonly MethodNote[];
   /** Which computation was used, in words: `exact`, `normal approximation with continuity correction`. */
   readonly variant?: string;
   readonly posthoc?: readonly PosthocComparison[];

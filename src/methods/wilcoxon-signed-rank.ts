@@ -4,12 +4,11 @@ import {medianOf, orderStatisticInterval, walshAverages} from './shared/hodges-l
 import {midRanks} from './shared/mid-ranks.js';
 import {normalCriticalCount, normalTails, tieSum} from './shared/normal-tails.js';
 import {pairedDifferences} from './shared/paired-differences.js';
-import {percent} from './shared/percent.js';
 import {rankBiserial} from './shared/rank-biserial.js';
 import {selectKth} from './shared/select-kth.js';
 import {sidedP, tailAlpha, type Tails} from './shared/sided-p.js';
 import {signedRankPmf} from './shared/signed-rank-distribution.js';
-import type {MethodDefinition, PairedDesign} from './types.js';
+import type {MethodDefinition, MethodNote, PairedDesign} from './types.js';
 
 /**
  * Wilcoxon signed-rank test on the paired differences `second - first`
@@ -87,23 +86,15 @@ export const wilcoxonSignedRank: MethodDefinition<PairedDesign> = {
     const ci = orderStatisticInterval((i) => selectKth(walsh, i), walshCount, k, options.alternative);
     const achieved = pmf && k > 0 ? 1 - (options.alternative === 'two-sided' ? 2 : 1) * atMost(pmf, k - 1) : null;
 
-    const warnings: string[] = [];
+    const warnings: MethodNote[] = [];
     if (zeros > 0) {
-      warnings.push(
-        `${zeros} of ${all} pairs had a difference ${second.label} - ${first.label} equal to ${options.mu} ` +
-          `and were dropped from the test (Wilcoxon's convention); the estimate uses all pairs.`,
-      );
+      warnings.push({kind: 'dropped-zeros', zeros, pairs: all, second: second.label, first: first.label, mu: options.mu, wilcoxon: true});
     }
     if (!exact && n <= EXACT_MAX_N) {
-      warnings.push(
-        `${zeros > 0 ? 'Zero differences' : 'Tied differences'}: the p-value uses the normal approximation ` +
-          'with tie and continuity correction, not the exact distribution.',
-      );
+      warnings.push({kind: 'ties-approximation', tied: zeros > 0 ? 'zero differences' : 'differences'});
     }
     if (k === 0) {
-      warnings.push(
-        `With ${all} pairs no interval for the shift reaches ${percent(options.confidence)} confidence, so its bounds are infinite.`,
-      );
+      warnings.push({kind: 'unattainable-interval', confidence: options.confidence, estimate: 'shift', pairs: all});
     }
     return {
       statistic: {name: 'V', value: vPlus},

@@ -1,4 +1,5 @@
-import type {Code, Paragraph, RootContent} from 'mdast';
+import type {Code, Paragraph, PhrasingContent, RootContent} from 'mdast';
+import {styleNamed} from '../interpret/number-style.js';
 import type {InterpretedBlock} from '../interpret/result-record.js';
 import type {FloatCounter} from './float-numbers.js';
 import {wording} from '../interpret/wording.js';
@@ -16,9 +17,15 @@ export function blockNodes(code: Code, block: InterpretedBlock, chart: {alt: str
   const position = code.position;
   const nodes: RootContent[] = [];
   if (spec.show.has('sentence')) {
+    // Statistic symbols in italics where the style asks (JSON keeps the plain sentence).
+    const italic = styleNamed(spec.style).italicSymbols;
+    const children: PhrasingContent[] = block.segments.map((segment) =>
+      segment.symbol && italic
+        ? {type: 'emphasis', position, children: [{type: 'text', value: segment.text, position}]}
+        : {type: 'text', value: segment.text, position},
+    );
     // `data-stet-block` lets the live-reload page of `stet watch --serve` find the sentence.
-    const data = {hProperties: {dataStetBlock: spec.id}};
-    nodes.push({type: 'paragraph', position, data, children: [{type: 'text', value: block.result.sentence, position}]});
+    nodes.push({type: 'paragraph', position, data: {hProperties: {dataStetBlock: spec.id}}, children: mergeText(children)});
   }
   if (spec.show.has('table')) {
     const tables = resultsTables(block);
@@ -55,4 +62,15 @@ function caption(block: InterpretedBlock, word: string, number: number, kind: 't
 
 function capitalise(text: string): string {
   return text.charAt(0).toUpperCase() + text.slice(1);
+}
+
+/** Adjacent text segments (upright symbols) as one node, as Markdown would parse them. */
+function mergeText(children: PhrasingContent[]): PhrasingContent[] {
+  const merged: PhrasingContent[] = [];
+  for (const child of children) {
+    const previous = merged.at(-1);
+    if (child.type === 'text' && previous?.type === 'text') merged[merged.length - 1] = {...previous, value: previous.value + child.value};
+    else merged.push(child);
+  }
+  return merged;
 }

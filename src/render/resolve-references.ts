@@ -1,10 +1,13 @@
 import type {Root, Text} from 'mdast';
-import {visit} from 'unist-util-visit';
+import {SKIP, visit} from 'unist-util-visit';
+import {styleNamed} from '../interpret/number-style.js';
+import {markedOf, plainText} from '../interpret/symbol-marks.js';
 import type {InterpretedBlock} from '../interpret/result-record.js';
 import {didYouMean} from '../spec/suggest.js';
 import {UserError} from '../user-error.js';
 import {formatField} from './format-field.js';
 import {placeInText} from './place-in-text.js';
+import {markedPhrasing} from './marked-phrasing.js';
 
 /** `{{id}}` or `{{id.path.to.field}}` in prose. */
 export const referencePattern = /\{\{\s*([a-z][a-z0-9_-]*)((?:\.[A-Za-z0-9_]+)*)\s*\}\}/g;
@@ -20,8 +23,9 @@ export function resolveReferences(
   failed: ReadonlySet<string>,
   report: (error: UserError) => void,
 ): void {
-  visit(tree, 'text', (node: Text) => {
-    node.value = node.value.replace(referencePattern, (whole, id: string, dotted: string, offset: number) => {
+  const italic = styleNamed([...blocks.values()][0]?.computed.spec.style).italicSymbols;
+  visit(tree, 'text', (node: Text, index, parent) => {
+    const value = node.value.replace(referencePattern, (whole, id: string, dotted: string, offset: number) => {
       const place = placeInText(node, offset);
       if (failed.has(id)) return whole;
       const block = blocks.get(id);
@@ -35,7 +39,7 @@ export function resolveReferences(
       }
       if (!dotted) return block.compact;
       const path = dotted.slice(1).split('.');
-      const text = path[0] === 'sentence' && path.length === 1 ? block.result.sentence : formatField(block, path);
+      const text = path[0] === 'sentence' && path.length === 1 ? markedOf(block.segments) : formatField(block, path);
       if (text === undefined) {
         report(new UserError(`unknown field \`${dotted.slice(1)}\` in reference to \`${id}\``, {
           ruleId: 'unknown-reference',
@@ -46,5 +50,14 @@ export function resolveReferences(
       }
       return text;
     });
+    if (value === node.value) return undefined;
+    // Values carry marked symbols: the text becomes text and emphasis nodes.
+    const nodes = markedPhrasing(value, italic).map((child) => ({...child, position: node.position}));
+    if (!parent || index === undefined) {
+      node.value = plainText(value);
+      return undefined;
+    }
+    parent.children.splice(index, 1, ...nodes);
+    return [SKIP, index + nodes.length];
   });
 }

@@ -1,8 +1,9 @@
 import type {PhrasingContent, Table, TableRow} from 'mdast';
-import {blockNumbers, boundedScale, type BlockNumbers} from '../interpret/block-numbers.js';
-import {formatFixed, formatP, formatUnitBounded} from '../interpret/format-number.js';
+import {blockNumbers, type BlockNumbers} from '../interpret/block-numbers.js';
+import {styleNamed} from '../interpret/number-style.js';
 import type {InterpretedBlock} from '../interpret/result-record.js';
 import {capitalize, effectNames} from '../interpret/wording.js';
+import {markedPhrasing} from './marked-phrasing.js';
 
 /**
  * GFM tables of a block: descriptives per group (numeric outcomes) or the
@@ -18,13 +19,14 @@ export type ResultsTableKind = 'descriptives' | 'counts' | 'test' | 'posthoc';
 /** The same tables, each with its kind (the appendix captions them). */
 export function resultsTablesByKind(block: InterpretedBlock): {kind: ResultsTableKind; table: Table}[] {
   const numbers = blockNumbers(block.computed, block.result.p_adjusted ?? block.result.p);
+  const italic = styleNamed(block.computed.spec.style).italicSymbols;
   const tables = {
     descriptives: descriptivesTable(block, numbers),
-    counts: countsTable(block),
+    counts: countsTable(block, numbers),
     test: testTable(block, numbers),
     posthoc: posthocTable(block, numbers),
   };
-  return Object.entries(tables).flatMap(([kind, table]) => (table ? [{kind: kind as ResultsTableKind, table}] : []));
+  return Object.entries(tables).flatMap(([kind, table]) => (table ? [{kind: kind as ResultsTableKind, table: withPhrasing(table, italic)}] : []));
 }
 
 function descriptivesTable(block: InterpretedBlock, numbers: BlockNumbers): Table | undefined {
@@ -33,6 +35,7 @@ function descriptivesTable(block: InterpretedBlock, numbers: BlockNumbers): Tabl
   if (entries.length === 0) return undefined;
   const d = numbers.summaryDecimals;
   const r = numbers.recordedDecimals;
+  const formatFixed = numbers.format.fixed;
   const unit = computed.units && computed.design.kind !== 'bivariate' ? ` (${computed.units})` : '';
   const header = computed.design.kind === 'paired' || computed.design.kind === 'bivariate' ? 'Variable' : computed.spec.by ?? 'Sample';
   return table(
@@ -41,8 +44,9 @@ function descriptivesTable(block: InterpretedBlock, numbers: BlockNumbers): Tabl
   );
 }
 
-function countsTable(block: InterpretedBlock): Table | undefined {
+function countsTable(block: InterpretedBlock, numbers: BlockNumbers): Table | undefined {
   const {design, spec} = block.computed;
+  const {fixed: formatFixed, bounded: formatUnitBounded} = numbers.format;
   if (design.kind === 'contingency') {
     return table([`${spec.y} \\ ${spec.by}`, ...design.columns], design.rows.map((row, i) => [row, ...design.counts[i]!.map(String)]));
   }
@@ -64,11 +68,11 @@ function testTable(block: InterpretedBlock, numbers: BlockNumbers): Table | unde
   const {result, computed} = block;
   if (result.p === undefined) return undefined;
   const p = (value: number) => {
-    const {relation, text} = formatP(value, result.alpha);
+    const {relation, text} = numbers.format.p(value, result.alpha);
     return relation === '=' ? text : `${relation} ${text}`;
   };
   const level = `${Math.round(computed.spec.confidence * 1000) / 10}% CI`;
-  const alpha = formatUnitBounded(result.alpha!, 3).replace(/0+$/, '');
+  const alpha = numbers.alpha;
   const adjusted = result.p_adjusted != null;
   const columns: [string, string][] = [
     ['Test', result.title],
@@ -79,9 +83,7 @@ function testTable(block: InterpretedBlock, numbers: BlockNumbers): Table | unde
   columns.push([`Decision (α = ${alpha})`, result.decision === 'reject' ? 'reject H₀' : 'fail to reject H₀']);
   const {estimate, effect} = result;
   if (estimate) {
-    // Correlations and proportions without a leading zero, like their interval.
-    const value = boundedScale(computed) ? formatUnitBounded(estimate.value, Math.max(2, numbers.estimateDecimals)) : numbers.withUnits(estimate.value);
-    columns.push([`${capitalize(estimate.name)} [${level}]`, `${value} ${numbers.estimateCi.replace(/^.*CI /, '')}`]);
+    columns.push([`${capitalize(estimate.name)} [${level}]`, `${numbers.estimateText(estimate.value)} ${numbers.estimateCi.replace(/^.*CI /, '')}`]);
   }
   // An effect that is the estimate itself (r, an odds ratio) gets no second column.
   const repeatsEstimate = estimate && effect && effect.value === estimate.value && effect.ci?.[0] === estimate.ci[0] && effect.ci?.[1] === estimate.ci[1];
@@ -98,6 +100,7 @@ function posthocTable(block: InterpretedBlock, numbers: BlockNumbers): Table | u
   if (!comparisons?.length) return undefined;
   const level = `${Math.round(block.computed.spec.confidence * 1000) / 10}% CI`;
   const d = numbers.estimateDecimals;
+  const {fixed: formatFixed, p: formatP} = numbers.format;
   // Dunn's procedure compares mean ranks and has no interval.
   const ranks = comparisons.every((c) => c.ci === null);
   const header = ranks ? ['Comparison', 'Difference in mean ranks', 'Adjusted p'] : ['Comparison', 'Difference', `Simultaneous ${level}`, 'Adjusted p'];
@@ -128,4 +131,18 @@ function table(header: readonly string[], rows: readonly (readonly string[])[]):
 
 function text(value: string): PhrasingContent {
   return {type: 'text', value};
+}
+
+/** Cells hold marked symbols (`t(24.6) = 2.91`): set them as the style asks. */
+function withPhrasing(t: Table, italic: boolean): Table {
+  return {
+    ...t,
+    children: t.children.map((row) => ({
+      ...row,
+      children: row.children.map((cell) => ({
+        ...cell,
+        children: cell.children.flatMap((child) => (child.type === 'text' ? markedPhrasing(child.value, italic) : [child])),
+      })),
+    })),
+  };
 }

@@ -2,6 +2,7 @@ import type {InterpretedBlock} from '../interpret/result-record.js';
 import {escapeLatex} from './escape-latex.js';
 import {formatField} from './format-field.js';
 import {latexComment} from './table-tex.js';
+import {segmentsOf} from '../interpret/symbol-marks.js';
 
 /**
  * `NAME.values.tex`: every value a `{{id.path}}` reference can show, as a
@@ -25,7 +26,7 @@ export function valuesTex(blocks: ReadonlyMap<string, InterpretedBlock>, source:
   ];
   for (const [id, block] of blocks) {
     lines.push('', `% ${id}`);
-    for (const [field, text] of referenceableValues(block)) lines.push(`\\stetdefine{${id}}{${field}}{${escapeLatex(text)}}`);
+    for (const [field, text] of referenceableValues(block)) lines.push(`\\stetdefine{${id}}{${field}}{${latexText(text)}}`);
   }
   return `${lines.join('\n')}\n`;
 }
@@ -51,4 +52,9 @@ export function referenceableValues(block: InterpretedBlock): [string, string][]
   };
   visit(block.result, []);
   return values;
+}
+
+/** Marked text as LaTeX: statistic symbols in italics, as the Markdown sets them. */
+function latexText(text: string): string {
+  return segmentsOf(text).map((segment) => (segment.symbol ? `\\textit{${escapeLatex(segment.text)}}` : escapeLatex(segment.text))).join('');
 }

@@ -1,3 +1,4 @@
+import type {StyleName} from '../interpret/number-style.js';
 import type {Alternative} from '../methods/types.js';
 import type {Place} from '../user-error.js';
 
@@ -41,6 +42,8 @@ export interface BlockSpec {
   readonly chart: ChartKind;
   readonly show: ReadonlySet<ShowPart>;
   readonly caption: string | undefined;
+  /** Number conventions of the document (`style:`); default `science`. */
+  readonly style?: StyleName;
   /** Where the block's fence starts. */
   readonly place: Place;
   /** Where each key was written, for errors found in later stages. */

@@ -111,6 +111,7 @@ export function parseBlock(body: string, origin: Place, fence: Place, settings: 
     alternative: optional('alternative', (c) => readChoice(c, ['two-sided', 'greater', 'less'] as const)) ?? 'two-sided',
     alpha: optional('alpha', (c) => readNumber(c, levelRules.alpha)) ?? settings.alpha,
     confidence: settings.confidence,
+    style: settings.style,
     family: optional('family', readString),
     smallestEffect: optional('smallest-effect', (c) => readNumber(c, smallestEffectRule)),
     chart: optional('chart', (c) => readChoice(c, chartKinds)) ?? 'auto',

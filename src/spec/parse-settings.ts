@@ -1,6 +1,7 @@
 import {isScalar} from 'yaml';
 import {defaultDatasetOptions, normalizeDelimiter, type DatasetOptions} from '../data/dataset-options.js';
 import {mappingEntries, parseYamlAt} from '../document/yaml-at.js';
+import {styleNames, type StyleName} from '../interpret/number-style.js';
 import {UserError, type Place} from '../user-error.js';
 import {didYouMean} from './suggest.js';
 import {levelRules, readChoice, readNumber, readString, readStringList, type ValueContext} from './read-value.js';
@@ -22,6 +23,8 @@ export interface DocumentSettings {
   readonly alpha: number;
   readonly confidence: number;
   readonly adjust: AdjustMethod;
+  /** Number conventions (`number-style.ts`). */
+  readonly style: StyleName;
   readonly datasets: ReadonlyMap<string, DatasetDeclaration>;
   /** Front matter without the `stet` key, for the Markdown output. */
   readonly passthrough: Readonly<Record<string, unknown>>;
@@ -32,11 +35,12 @@ export const defaultSettings: DocumentSettings = {
   alpha: 0.05,
   confidence: 0.95,
   adjust: 'none',
+  style: 'science',
   datasets: new Map(),
   passthrough: {},
 };
 
-const settingKeys = ['alpha', 'confidence', 'adjust', 'datasets'];
+const settingKeys = ['alpha', 'confidence', 'adjust', 'style', 'datasets'];
 const datasetKeys = ['file', 'delimiter', 'decimal', 'missing', 'types', 'units', 'labels'];
 
 /** @param origin Report position of the first line inside the `---` fences. */
@@ -56,6 +60,7 @@ export function parseSettings(text: string, origin: Place): DocumentSettings {
     if (key === 'alpha') settings = {...settings, alpha: readNumber(context, levelRules.alpha)};
     else if (key === 'confidence') settings = {...settings, confidence: readNumber(context, levelRules.confidence)};
     else if (key === 'adjust') settings = {...settings, adjust: readChoice(context, adjustMethods)};
+    else if (key === 'style') settings = {...settings, style: readStyle(context)};
     else if (key === 'datasets') settings = {...settings, datasets: parseDatasets(context)};
     else {
       throw new UserError(`unknown setting \`${key}\` under \`stet\``, {
@@ -112,6 +117,18 @@ function parseDatasetOptions(context: ValueContext): DatasetOptions {
     }
   }
   return options;
+}
+
+/** Unknown styles get a did-you-mean, like unknown keys. */
+function readStyle(context: ValueContext): StyleName {
+  const written = readString(context);
+  const style = styleNames.find((name) => name === written);
+  if (style) return style;
+  throw new UserError(`unknown style \`${written}\``, {
+    ruleId: 'invalid-value',
+    place: context.yaml.placeOf(context.node),
+    hint: didYouMean(written, styleNames, `Styles are: ${styleNames.join(', ')}.`),
+  });
 }
 
 function readDelimiter(context: ValueContext): string {

@@ -94,10 +94,10 @@ describe('chi-square test of independence', () => {
   it('warns when an expected count is below 5 and points 2×2 tables to Fisher’s exact test', () => {
     const small = chiSquare.compute(table([[3, 1], [1, 3]]), opts());
     expect(small.warnings).toHaveLength(1);
-    expect(small.warnings![0]).toContain('4 of 4 expected counts are below 5 (smallest 2)');
-    expect(small.warnings![0]).toContain('`fisher-exact`');
+    expect(small.warnings![0]).toEqual({kind: 'small-expected', below: 4, cells: 4, smallest: expect.closeTo(2, 12), alternative: 'fisher-exact'});
     const wide = chiSquare.compute(table([[3, 1, 9], [1, 3, 9]]), opts());
-    expect(wide.warnings![0]).toContain('combining sparse levels');
+    expect(wide.warnings![0]).toMatchObject({kind: 'small-expected'});
+    expect(wide.warnings![0]).not.toHaveProperty('alternative');
   });
 
   it('refuses what it cannot compute with a MethodError', () => {

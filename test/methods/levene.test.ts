@@ -50,7 +50,7 @@ describe('Levene’s test (method)', () => {
   it('warns about a constant group and leaves the SD ratio undefined', () => {
     const result = levene.compute({kind: 'k-group', samples: [sample('a', [5, 5, 5]), sample('b', [1, 2, 4])]}, options());
     expect((result.details!.sd_ratio as {value: number | null}).value).toBeNull();
-    expect(result.warnings).toEqual(['"a" is constant (SD 0).']);
+    expect(result.warnings).toEqual([{kind: 'constant-groups', groups: ['a']}]);
   });
 
   it('gives p in [0, 1]', () => {

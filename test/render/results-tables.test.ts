@@ -30,7 +30,7 @@ describe('results tables', () => {
     const header = md.split('\n').find((line) => line.startsWith('| Test |') && line.includes('Pearson'))!;
     expect(header).toBe('| Test | Statistic | p | Decision (α = .05) | Pearson r \\[95% CI] |');
     // The shape, not the digits: r and both bounds as `.dd`, as in the sentence.
-    expect(md).toMatch(/\| Pearson’s correlation \| t\(22\) = [^|]+ \| [^|]+ \| [^|]+ \| −?\.\d\d \\\[−?\.\d\d, −?\.\d\d] \|\n/);
+    expect(md).toMatch(/\| Pearson’s correlation \| _t_\(22\) = [^|]+ \| [^|]+ \| [^|]+ \| −?\.\d\d \\\[−?\.\d\d, −?\.\d\d] \|\n/);
   });
 
   it('label Dunn’s comparisons as mean ranks and give an effect without interval no CI header', () => {

@@ -3,6 +3,7 @@ import {tmpdir} from 'node:os';
 import path from 'node:path';
 import {beforeAll, describe, expect, it} from 'vitest';
 import type {CompiledReport} from '../../src/compile-report.js';
+import {plainText} from '../../src/interpret/symbol-marks.js';
 import {escapeLatex} from '../../src/render/escape-latex.js';
 import {formatField} from '../../src/render/format-field.js';
 import {referenceableValues} from '../../src/render/values-tex.js';
@@ -30,9 +31,11 @@ describe('NAME.values.tex', () => {
     expect(fields.get('groups.lean.mean')).toBe(formatField(block, ['groups', 'lean', 'mean']));
     expect(fields.get('')).toBe(block.compact);
     expect(fields.get('sentence')).toBe(block.result.sentence);
-    expect(values).toContain(`\\stetdefine{lean-rich}{p}{${escapeLatex(fields.get('p')!)}}\n`);
+    // The p symbol in italics, as in the Markdown.
+    const pText = plainText(fields.get('p')!);
+    expect(values).toContain(`\\stetdefine{lean-rich}{p}{\\textit{p}${escapeLatex(pText.slice(1))}}\n`);
     // The Markdown's {{lean-rich.p}} shows the same text.
-    expect(report.files.get('report.md')).toContain(`The welch test gave ${fields.get('p')}.`);
+    expect(report.files.get('report.md')).toContain(`The welch test gave _p_${pText.slice(1)}.`);
   });
 
   it('defines values of every block, including method-specific ones', () => {
@@ -68,7 +71,7 @@ ${[...report.data!.blocks.keys()].map((id) => `\\input{tables/${id}.tex}`).join(
     expect(latexProblems(run.log)).toEqual([]);
     expect(run.log).toContain('stet: no value lean_rich.no_such_field');
     expect((await stat(path.join(dir, 'chapter.pdf'))).size).toBeGreaterThan(1000);
-    const p = formatField(report.data!.blocks.get('lean-rich')!, ['p'])!;
+    const p = plainText(formatField(report.data!.blocks.get('lean-rich')!, ['p'])!);
     // The typeset text, from the PDF's uncompressed content streams.
     const typeset = pdfStrings(await readFile(path.join(dir, 'chapter.pdf'), 'latin1'));
     expect(typeset).toContain(`In short, ${p}`.replace(/\s+/g, ''));

@@ -1,3 +1,4 @@
+import type {MethodNote} from '../types.js';
 import {MethodError} from '../method-error.js';
 import type {ContingencyDesign} from '../types.js';
 
@@ -42,10 +43,10 @@ export function tableMargins(design: ContingencyDesign, title: string): TableMar
 }
 
 /** The author-facing warning when an expected count is below 5 (Cochran 1954, Biometrics 10:417), or undefined. */
-export function smallExpectedWarning(expected: readonly (readonly number[])[], advice: string): string | undefined {
+export function smallExpectedWarning(expected: readonly (readonly number[])[], alternative: string | undefined): MethodNote | undefined {
   const cells = expected.flat();
   const small = cells.filter((e) => e < 5);
   if (small.length === 0) return undefined;
   const smallest = Math.min(...small);
-  return `${small.length} of ${cells.length} expected counts are below 5 (smallest ${Number(smallest.toPrecision(3))}), so the chi-square approximation may be inaccurate; ${advice}`;
+  return {kind: 'small-expected', below: small.length, cells: cells.length, smallest, ...(alternative ? {alternative} : {})};
 }

@@ -1,5 +1,5 @@
 import {MethodError} from '../method-error.js';
-import type {Sample} from '../types.js';
+import type {MethodNote, Sample} from '../types.js';
 import type {OneWaySums} from './one-way-sums.js';
 
 /** Preconditions and warnings shared by the k-group tests (ANOVA, Welch's ANOVA, Kruskal–Wallis). */
@@ -26,7 +26,7 @@ export function requireTwoSided(alternative: string, title: string): void {
 }
 
 /** Warnings when group SDs differ by more than a factor of 2 (a rule of thumb, a fact of the trade). */
-export function spreadRatioWarning(sums: Pick<OneWaySums, 'labels' | 'variances'>, advice: string): string[] {
+export function spreadRatioWarning(sums: Pick<OneWaySums, 'labels' | 'variances'>, alternative: string): MethodNote[] {
   let low = -1;
   let high = -1;
   sums.variances.forEach((v, i) => {
@@ -37,7 +37,5 @@ export function spreadRatioWarning(sums: Pick<OneWaySums, 'labels' | 'variances'
   if (low < 0) return [];
   const ratio = Math.sqrt(sums.variances[high]! / sums.variances[low]!);
   if (!(ratio > 2)) return [];
-  return [
-    `The standard deviations of ${sums.labels[high]} and ${sums.labels[low]} differ by a factor of ${ratio.toFixed(1)}; ${advice}`,
-  ];
+  return [{kind: 'spread-ratio', larger: sums.labels[high]!, smaller: sums.labels[low]!, ratio, alternative}];
 }

@@ -47,5 +47,6 @@ export function largestDifference(input: LargestDifferenceInput): Estimate {
     value,
     ci: [value - half, value + half],
     level: confidence,
+    pair: [labels[low]!, labels[high]!],
   };
 }

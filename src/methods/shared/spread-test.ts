@@ -37,7 +37,7 @@ export function spreadTestOutcome({samples}: KGroupDesign, centre: LeveneCentre,
     if (sd > sds[largest]!) largest = i;
     if (sd < sds[smallest]!) smallest = i;
   });
-  const constant = samples.filter((_, i) => sds[i] === 0).map((s) => `"${s.label}"`);
+  const constant = samples.filter((_, i) => sds[i] === 0).map((s) => s.label);
   return {
     statistic: {name: 'F', value: f},
     df: [df1, df2],
@@ -52,6 +52,6 @@ export function spreadTestOutcome({samples}: KGroupDesign, centre: LeveneCentre,
         smallest: samples[smallest]!.label,
       },
     },
-    ...(constant.length > 0 ? {warnings: [`${constant.join(', ')} ${constant.length > 1 ? 'are' : 'is'} constant (SD 0).`]} : {}),
+    ...(constant.length > 0 ? {warnings: [{kind: 'constant-groups' as const, groups: constant}]} : {}),
   };
 }

@@ -1,5 +1,5 @@
 import {MethodError} from '../method-error.js';
-import type {Alternative, Sensitivity} from '../types.js';
+import type {Alternative, MethodNote, Sensitivity} from '../types.js';
 import {twoProportionDetectable, twoProportionPower} from './two-proportion-power.js';
 
 /**
@@ -29,7 +29,7 @@ export interface TwoProportionSensitivityInput {
 export interface TwoProportionSensitivity {
   readonly sensitivity: Sensitivity | undefined;
   readonly baseline: number | undefined;
-  readonly warnings: readonly string[];
+  readonly warnings: readonly MethodNote[];
 }
 
 export function twoProportionSensitivity(input: TwoProportionSensitivityInput): TwoProportionSensitivity {
@@ -42,16 +42,16 @@ export function twoProportionSensitivity(input: TwoProportionSensitivityInput): 
   }
   const direction: 1 | -1 = alternative === 'greater' ? 1 : alternative === 'less' ? -1 : p1 <= 0.5 ? 1 : -1;
   const base = {p1, n1, n2, alpha, alternative};
-  const warnings: string[] = [];
+  const warnings: MethodNote[] = [];
   let power: number | null = null;
   if (smallestEffect !== undefined) {
     const p2 = p1 + direction * Math.abs(smallestEffect);
     if (p2 >= 0 && p2 <= 1) power = twoProportionPower({...base, p2});
-    else warnings.push(`The declared smallest effect (${Math.abs(smallestEffect)}) would take the proportion beyond ${direction === 1 ? 1 : 0} from the first group’s ${p1}, so no power is reported for it.`);
+    else warnings.push({kind: 'smallest-effect-out-of-range', smallest: Math.abs(smallestEffect), bound: direction === 1 ? 1 : 0, baseline: p1});
   }
   const detectable = twoProportionDetectable(base, direction, 0.8);
   if (detectable === null) {
-    warnings.push(`No difference in proportions from the first group’s ${p1} reaches 80% power with groups of ${n1} and ${n2}, so no sensitivity is reported.`);
+    warnings.push({kind: 'no-sensitivity', baseline: p1, n1, n2});
     return {sensitivity: undefined, baseline: undefined, warnings};
   }
   return {sensitivity: {power_at_smallest_effect: power, min_detectable_effect_80: detectable}, baseline: p1, warnings};

@@ -23,9 +23,10 @@ describe('tableMargins', () => {
 
 describe('smallExpectedWarning', () => {
   it('counts expected cells below 5 and gives the smallest (Cochran 1954)', () => {
-    expect(smallExpectedWarning([[5, 6], [7, 8]], 'advice')).toBeUndefined();
-    expect(smallExpectedWarning([[4.999, 6], [1.23456, 8]], 'advice.')).toBe(
-      '2 of 4 expected counts are below 5 (smallest 1.23), so the chi-square approximation may be inaccurate; advice.',
+    expect(smallExpectedWarning([[5, 6], [7, 8]], 'fisher-exact')).toBeUndefined();
+    expect(smallExpectedWarning([[4.999, 6], [1.23456, 8]], 'fisher-exact')).toEqual(
+      {kind: 'small-expected', below: 2, cells: 4, smallest: 1.23456, alternative: 'fisher-exact'},
     );
+    expect(smallExpectedWarning([[4.999, 6], [1.23456, 8]], undefined)).not.toHaveProperty('alternative');
   });
 });
