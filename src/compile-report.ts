@@ -7,6 +7,7 @@ import {unified} from 'unified';
 import type {Root} from 'mdast';
 import {VFile} from 'vfile';
 import type {VFileMessage} from 'vfile-message';
+import {familyChartPath} from './charts/family-charts.js';
 import remarkStet, {type StetData} from './remark-stet.js';
 import {htmlPage} from './render/html-page.js';
 import {resultsJson} from './render/results-json.js';
@@ -82,7 +83,16 @@ export async function compileReport(reportPath: string, options: CompileOptions 
     files.set(`${name}.html`, await htmlPage({title, body, datasets: data.datasets, version, builtAt}));
   }
   if (formats.has('json')) files.set(`${name}.results.json`, resultsJson(data, path.basename(absolute), version));
-  for (const [id, chart] of data.charts) files.set(`charts/${id}.svg`, chart.svg);
+  for (const [id, chart] of data.charts) {
+    for (const [name, drawn] of [[id, chart] as const, ...chart.extra.map((e) => [`${id}-${e.suffix}`, e] as const)]) {
+      files.set(`charts/${name}.svg`, drawn.svg);
+      files.set(`charts/${name}.vl.json`, drawn.vlSpec);
+    }
+  }
+  for (const [family, chart] of data.familyCharts) {
+    files.set(`${familyChartPath(family)}.svg`, chart.svg);
+    files.set(`${familyChartPath(family)}.vl.json`, chart.vlSpec);
+  }
 
   return {...failed, ok: true, files};
 }

@@ -3,6 +3,8 @@ import path from 'node:path';
 import {SKIP, visit} from 'unist-util-visit';
 import type {VFile} from 'vfile';
 import {blockChart, type BlockChart} from './charts/block-chart.js';
+import {familyCharts} from './charts/family-charts.js';
+import type {RenderedChart} from './charts/render-draft.js';
 import {adjustFamilies} from './compute/adjust-families.js';
 import {computeBlock, type ComputedBlock} from './compute/compute-block.js';
 import type {Dataset} from './data/column.js';
@@ -32,6 +34,8 @@ export interface StetData {
   readonly datasets: ReadonlyMap<string, Dataset>;
   /** Chart SVG by block id; the document refers to `charts/ID.svg`. */
   readonly charts: ReadonlyMap<string, BlockChart>;
+  /** Forest plot by family name; written as `charts/family-NAME.svg`. */
+  readonly familyCharts: ReadonlyMap<string, RenderedChart>;
 }
 
 declare module 'vfile' {
@@ -106,11 +110,13 @@ export default function remarkStet(options: RemarkStetOptions = {}) {
 
     // 8. Charts.
     const charts = new Map<string, BlockChart>();
+    let families: ReadonlyMap<string, RenderedChart> = new Map();
     if (options.charts !== false) {
       for (const block of blocks.values()) {
         const chart = await attemptAsync(report, () => blockChart(block));
         if (chart) charts.set(block.computed.spec.id, chart);
       }
+      families = await familyCharts(blocks.values());
     }
 
     // 9. Replace each block by its output (failed blocks stay as written).
@@ -126,7 +132,7 @@ export default function remarkStet(options: RemarkStetOptions = {}) {
     // 10. Inline references.
     resolveReferences(tree, blocks, failed, report);
 
-    file.data.stet = {settings, blocks, datasets: await loader.loaded(), charts};
+    file.data.stet = {settings, blocks, datasets: await loader.loaded(), charts, familyCharts: families};
   };
 }
 

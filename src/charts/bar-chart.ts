@@ -20,7 +20,7 @@ export interface BarChartInput {
   readonly xTitle: string;
   readonly yTitle: string;
   /** Legend title for the categories; no legend when there is one category. */
-  readonly categoryTitle?: string;
+  readonly categoryTitle?: string | null;
   /** A value marked by a dashed horizontal rule, e.g. the null proportion. */
   readonly reference?: number;
   /** Fix the y axis to [0, 1] (proportions). */

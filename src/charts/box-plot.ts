@@ -38,6 +38,11 @@ export interface BoxPlotInput {
   readonly reference?: number;
   /** Width of the plotting area in px (default `sizes.plotWidth`). */
   readonly width?: number;
+  /**
+   * Prefix of the layer names (default none). vega-lite names marks and
+   * datasets by them, so two box plots in one chart need different prefixes.
+   */
+  readonly layerPrefix?: string;
 }
 
 interface Row {
@@ -134,6 +139,7 @@ export function boxPlotLayer(input: BoxPlotInput) {
   if (input.intervals && input.intervals.length !== k) throw new Error(`boxPlotSpec: ${input.intervals.length} intervals for ${k} samples`);
   if (input.centres && input.centres.length !== k) throw new Error(`boxPlotSpec: ${input.centres.length} centres for ${k} samples`);
   const plotWidth = input.width ?? sizes.plotWidth;
+  const pre = input.layerPrefix ?? '';
   const slot = plotWidth / k;
   const box = boxWidth(k, plotWidth);
   const data = rows(input, (0.4 * box) / slot);
@@ -157,7 +163,7 @@ export function boxPlotLayer(input: BoxPlotInput) {
   const color = {field: 'box', type: 'ordinal' as const, scale: {domain: labels.map((_, i) => i), range: [...palette]}, legend: null};
 
   const pairLines = {
-    name: 'pairs',
+    name: `${pre}pairs`,
     mark: {type: 'line' as const, color: ink.pair, strokeWidth: 0.75},
     encoding: {x, y, detail: {field: 'subject', type: 'nominal' as const}},
   };
@@ -185,19 +191,19 @@ export function boxPlotLayer(input: BoxPlotInput) {
     layer: [
       ...(input.reference === undefined
         ? []
-        : [{name: 'reference', data: {values: [{reference: input.reference}]}, mark: {type: 'rule' as const, color: ink.rule, strokeDash: [4, 3]}, encoding: {y: {...y, field: 'reference'}}}]),
+        : [{name: `${pre}reference`, data: {values: [{reference: input.reference}]}, mark: {type: 'rule' as const, color: ink.rule, strokeDash: [4, 3]}, encoding: {y: {...y, field: 'reference'}}}]),
       ...(input.paired ? [pairLines] : []),
       ...(input.boxes === false ? [] : [boxLayer]),
       {
-        name: 'points',
+        name: `${pre}points`,
         mark: {type: 'circle', size: sizes.point, opacity: 0.85, stroke: 'white', strokeWidth: 0.5},
         encoding: {x, y, color},
       },
       ...(input.intervals
-        ? [{name: 'intervals', data: {values: centreRows}, mark: {type: 'rule' as const, color: ink.text, strokeWidth: 1.5}, encoding: {x: sideX, y: {...y, field: 'lower'}, y2: {field: 'upper'}}}]
+        ? [{name: `${pre}intervals`, data: {values: centreRows}, mark: {type: 'rule' as const, color: ink.text, strokeWidth: 1.5}, encoding: {x: sideX, y: {...y, field: 'lower'}, y2: {field: 'upper'}}}]
         : []),
       {
-        name: 'means',
+        name: `${pre}means`,
         data: {values: centreRows},
         mark: {type: 'point', size: sizes.meanSymbol, filled: true, fill: 'white', stroke: ink.text, strokeWidth: 1.5},
         encoding: {
@@ -208,7 +214,7 @@ export function boxPlotLayer(input: BoxPlotInput) {
         },
       },
       {
-        name: 'group-labels',
+        name: `${pre}group-labels`,
         data: {values: labels.map((label, i) => ({label, box: i}))},
         mark: {type: 'text', baseline: 'top', fontSize: sizes.label, color: ink.label, limit: slot - 8, y: plotHeight + 6},
         encoding: {x: boxX, text: {field: 'label', type: 'nominal' as const}},

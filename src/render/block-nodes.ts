@@ -7,7 +7,11 @@ import {resultsTables} from './results-tables.js';
  * and its chart (as an image of `charts/ID.svg`), as the block's `show`
  * asks. Every node keeps the block's position so messages point at it.
  */
-export function blockNodes(code: Code, block: InterpretedBlock, chart: {alt: string} | undefined): RootContent[] {
+export function blockNodes(
+  code: Code,
+  block: InterpretedBlock,
+  chart: {alt: string; extra?: readonly {suffix: string; alt: string}[]} | undefined,
+): RootContent[] {
   const {spec} = block.computed;
   const position = code.position;
   const nodes: RootContent[] = [];
@@ -23,6 +27,14 @@ export function blockNodes(code: Code, block: InterpretedBlock, chart: {alt: str
       position,
       children: [{type: 'image', url: `charts/${spec.id}.svg`, alt: chart.alt, title: null, position}],
     });
+    // Extra charts (post-hoc pairs) follow as their own images: `charts/ID-SUFFIX.svg`.
+    for (const extra of chart.extra ?? []) {
+      nodes.push({
+        type: 'paragraph',
+        position,
+        children: [{type: 'image', url: `charts/${spec.id}-${extra.suffix}.svg`, alt: extra.alt, title: null, position}],
+      });
+    }
   }
   if (spec.caption && (spec.show.has('table') || (chart && spec.show.has('chart')))) {
     nodes.push({

@@ -19,7 +19,13 @@ export async function toHtmlBody(tree: Root, charts: ReadonlyMap<string, BlockCh
 }
 
 /** Replace `<img src="charts/ID.svg">` by a figure holding the SVG itself. */
-function inlineCharts(hast: HastRoot, charts: ReadonlyMap<string, BlockChart>): void {
+function inlineCharts(hast: HastRoot, blockCharts: ReadonlyMap<string, BlockChart>): void {
+  // Every chart file by name: a block's own and its extras (`ID-pairs`).
+  const charts = new Map<string, {svg: string}>();
+  for (const [id, chart] of blockCharts) {
+    charts.set(id, chart);
+    for (const extra of chart.extra) charts.set(`${id}-${extra.suffix}`, extra);
+  }
   visit(hast, 'element', (node: Element, index, parent) => {
     if (node.tagName !== 'p' || !parent || index === undefined) return;
     const image = node.children.find((child): child is Element => child.type === 'element' && child.tagName === 'img');
