@@ -205,7 +205,7 @@ export function boxPlotLayer(input: BoxPlotInput) {
       {
         name: `${pre}means`,
         data: {values: centreRows},
-        mark: {type: 'point', size: sizes.meanSymbol, filled: true, fill: 'white', stroke: ink.text, strokeWidth: 1.5},
+        mark: {type: 'point', size: sizes.meanSymbol, filled: true, fill: 'white', stroke: ink.text, strokeWidth: 1.5, opacity: 1},
         encoding: {
           x: sideX,
           y: centreY,

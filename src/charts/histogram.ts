@@ -53,7 +53,7 @@ export function histogramSpec(input: HistogramInput): TopLevelSpec {
     const y = 10;
     layers.push(
       {name: 'interval', data: row, mark: {type: 'rule', color: ink.text, strokeWidth: 1.5, y}, encoding: {x: {...x, field: 'lower'}, x2: {field: 'upper'}}},
-      {name: 'estimate', data: row, mark: {type: 'point', shape: 'diamond', size: sizes.meanSymbol, filled: true, fill: 'white', stroke: ink.text, strokeWidth: 1.5, y}, encoding: {x}},
+      {name: 'estimate', data: row, mark: {type: 'point', shape: 'diamond', size: sizes.meanSymbol, filled: true, fill: 'white', stroke: ink.text, strokeWidth: 1.5, opacity: 1, y}, encoding: {x}},
       {name: 'estimate-label', data: row, mark: {type: 'text', align: 'left', dx: 6, y: y + 12, fontSize: sizes.label, color: ink.label}, encoding: {x: {...x, field: 'lower'}, text: {field: 'label'}}},
     );
   }

@@ -47,7 +47,7 @@ export function intervalPlotSpec(input: IntervalPlotInput): TopLevelSpec {
         mark: {type: 'rule', color: palette[0], strokeWidth: 2},
         encoding: {x: {...x, field: 'lower'}, x2: {field: 'upper'}, y},
       },
-      {name: 'estimates', mark: {type: 'point', shape: 'diamond', size: sizes.meanSymbol, filled: true, color: palette[0]}, encoding: {x, y}},
+      {name: 'estimates', mark: {type: 'point', shape: 'diamond', size: sizes.meanSymbol, filled: true, color: palette[0], opacity: 1}, encoding: {x, y}},
     ],
     config: {axisY: {grid: false, domain: false}, axisX: {grid: true}},
   } as TopLevelSpec;
