@@ -6,8 +6,9 @@
 /** Items of the named layer (dashes become underscores): one `<path>` or `<line>` (rules) each, or `<text>`. */
 export function items(svg: string, layer: string, tag: 'path|line' | 'text' = 'path|line'): string[] {
   layer = layer.replace(/-/g, '_');
-  const groups = [...svg.matchAll(new RegExp(`<g class="mark-[a-z]+ role-mark ${layer}_marks"[^>]*>(.*?)</g>`, 'g'))];
-  return groups.flatMap((g) => [...(g[1] ?? '').matchAll(new RegExp(`<(?:${tag}) [^>]*>`, 'g'))].map((m) => m[0]));
+  const groups = [...svg.matchAll(new RegExp(`<g class="mark-[a-z]+ role-mark ${layer}_marks"[^>]*?(/?)>(.*?)</g>`, 'g'))];
+  // An empty layer is a self-closed <g/>: it has no items.
+  return groups.flatMap((g) => (g[1] ? [] : [...(g[2] ?? '').matchAll(new RegExp(`<(?:${tag}) [^>]*>`, 'g'))].map((m) => m[0])));
 }
 
 /** Every `id="…"` in the SVG. */
