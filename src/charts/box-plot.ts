@@ -5,6 +5,7 @@
 import type {TopLevelSpec} from 'vega-lite';
 import {summarize} from '../methods/shared/summarize.js';
 import type {Sample} from '../methods/types.js';
+import {boxStats} from './box-stats.js';
 import {clampInterval, extentOf} from './interval-bounds.js';
 import {ink, palette, schema, sizes} from './theme.js';
 
@@ -113,8 +114,8 @@ function rows(input: BoxPlotInput, spread: number): Row[] {
  * Convention (Tukey 1977, "Exploratory Data Analysis", ch. 2): the box spans
  * the first to the third quartile with a line at the median; whiskers reach
  * the most extreme observation within 1.5 × IQR of the box. Quartiles are
- * vega's (d3 `quantileSorted`): Hyndman & Fan (1996) type 7, the default of
- * R and numpy. Points beyond the whiskers are not drawn twice: every
+ * Hyndman & Fan (1996) type 7, the default of R and numpy (box-stats.ts).
+ * Points beyond the whiskers are not drawn twice: every
  * observation is already a point, jittered horizontally by `jitter(row)`.
  * The mean (or the given centre) is an open diamond beside the box, with its
  * interval as a bar through it when given. Non-finite values are left out.
@@ -168,20 +169,23 @@ export function boxPlotLayer(input: BoxPlotInput) {
     encoding: {x, y, detail: {field: 'subject', type: 'nominal' as const}},
   };
 
-  const boxLayer = {
-    mark: {
-      type: 'boxplot' as const,
-      orient: 'vertical' as const,
-      extent: 1.5,
-      outliers: false,
-      size: box,
-      box: {fillOpacity: 0.12, stroke: ink.rule, strokeWidth: 1},
-      median: {color: ink.text, strokeWidth: 1.5},
-      rule: {color: ink.rule},
-      ticks: {color: ink.rule, size: box / 2},
-    },
-    encoding: {x: boxX, y, color},
-  };
+  // Boxes drawn from our own quartiles (box-stats.ts) with plain marks: the
+  // same convention as vega-lite's composite boxplot at a third of the cost.
+  const half = box / 2 / slot;
+  const stats = input.samples.map((s) => boxStats(s.values));
+  const boxRows = stats.flatMap((st, i) => (st ? [{box: i, left: i - half, right: i + half, ...st}] : []));
+  // Whiskers and their caps, two per box, in one dataset each.
+  const whiskerRows = boxRows.flatMap((r) => [
+    {box: r.box, from: r.q1, to: r.lowerWhisker, capLeft: r.box - half / 2, capRight: r.box + half / 2},
+    {box: r.box, from: r.q3, to: r.upperWhisker, capLeft: r.box - half / 2, capRight: r.box + half / 2},
+  ]);
+  const span = (field: string) => ({...x, field});
+  const boxLayers = [
+    {name: `${pre}whiskers`, data: {values: whiskerRows}, mark: {type: 'rule' as const, color: ink.rule}, encoding: {x: boxX, y: {...y, field: 'from'}, y2: {field: 'to'}}},
+    {name: `${pre}caps`, data: {values: whiskerRows}, mark: {type: 'rule' as const, color: ink.rule}, encoding: {x: span('capLeft'), x2: {field: 'capRight'}, y: {...y, field: 'to'}}},
+    {name: `${pre}boxes`, data: {values: boxRows}, mark: {type: 'rect' as const, fillOpacity: 0.12, stroke: ink.rule, strokeWidth: 1}, encoding: {x: span('left'), x2: {field: 'right'}, y: {...y, field: 'q1'}, y2: {field: 'q3'}, color}},
+    {name: `${pre}medians`, data: {values: boxRows}, mark: {type: 'rule' as const, color: ink.text, strokeWidth: 1.5}, encoding: {x: span('left'), x2: {field: 'right'}, y: {...y, field: 'median'}}},
+  ];
   const centreY = {...y, field: 'centre'};
   const legend = {title: null, orient: 'top' as const, direction: 'horizontal' as const};
   return {
@@ -193,7 +197,7 @@ export function boxPlotLayer(input: BoxPlotInput) {
         ? []
         : [{name: `${pre}reference`, data: {values: [{reference: input.reference}]}, mark: {type: 'rule' as const, color: ink.rule, strokeDash: [4, 3]}, encoding: {y: {...y, field: 'reference'}}}]),
       ...(input.paired ? [pairLines] : []),
-      ...(input.boxes === false ? [] : [boxLayer]),
+      ...(input.boxes === false ? [] : boxLayers),
       {
         name: `${pre}points`,
         mark: {type: 'circle', size: sizes.point, opacity: 0.85, stroke: 'white', strokeWidth: 0.5},
