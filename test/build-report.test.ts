@@ -112,9 +112,15 @@ describe('building the sample report', () => {
     expect(markdown).not.toContain('{{');
     expect(markdown).not.toContain('```stet');
     expect(html).not.toContain('{{');
-    const charted = ['supplier-28d', 'supplier-7d', 'curing', 'regimes'];
+    // regimes-pairs: the post-hoc comparisons after the regimes ANOVA.
+    const charted = ['supplier-28d', 'supplier-7d', 'curing', 'regimes', 'regimes-pairs', 'wc-slope'];
     expect(html.match(/<svg/g)).toHaveLength(charted.length);
-    for (const id of charted) expect(await readFile(path.join(out, `charts/${id}.svg`), 'utf8')).toMatch(/^<svg/);
+    for (const id of charted) {
+      expect(await readFile(path.join(out, `charts/${id}.svg`), 'utf8')).toMatch(/^<svg/);
+      expect(JSON.parse(await readFile(path.join(out, `charts/${id}.vl.json`), 'utf8'))).toHaveProperty('$schema');
+    }
+    // The family's forest plot is written beside them.
+    expect(await readFile(path.join(out, 'charts/family-suppliers.svg'), 'utf8')).toMatch(/^<svg/);
     expect(html).toContain('Statistical significance is not a decision rule by itself');
     expect(html).toContain(results.datasets['cylinders']!.sha256);
   });

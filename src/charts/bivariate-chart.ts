@@ -85,9 +85,9 @@ function fitText(line: FittedLine, decimals: number, slopeDigits: number): strin
   return `y = ${formatFixed(line.intercept, decimals)} ${sign} ${formatFixed(Math.abs(line.slope), slopeDigits)} x`;
 }
 
-/** Decimals that show a slope's interval to two significant digits of its width. */
+/** Decimals that show a slope's interval to three significant digits of its width. */
 function slopeDecimals(ci: readonly [number, number]): number {
-  return decimalsForWidth(ci[1] - ci[0]);
+  return Math.min(6, decimalsForWidth(ci[1] - ci[0]) + 1);
 }
 
 /** Several predictors: each slope with its interval against zero. */
