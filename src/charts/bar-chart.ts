@@ -31,7 +31,12 @@ export function barChartSpec(input: BarChartInput): TopLevelSpec {
   if (input.bars.length === 0) throw new Error('barChartSpec: needs at least one bar');
   const groups = [...new Set(input.bars.map((b) => b.group))];
   const categories = [...new Set(input.bars.map((b) => b.category))];
-  if (categories.length > palette.length) throw new Error(`barChartSpec: at most ${palette.length} categories, got ${categories.length}`);
+  if (categories.length > palette.length) {
+    if (input.bars.some((b) => b.ci) || input.reference !== undefined) {
+      throw new Error(`barChartSpec: intervals and reference lines need at most ${palette.length} categories, got ${categories.length}`);
+    }
+    return panelledBars(input, groups, categories);
+  }
   const values = input.bars.map((b) => ({group: b.group, category: b.category, value: b.value, ...(b.ci ? {lower: b.ci[0], upper: b.ci[1]} : {})}));
   const x = {field: 'group', type: 'nominal' as const, title: input.xTitle, sort: groups, axis: {labelLimit: sizes.plotWidth / groups.length}};
   const xOffset = {field: 'category', type: 'nominal' as const, sort: categories};
@@ -66,4 +71,24 @@ export function barChartSpec(input: BarChartInput): TopLevelSpec {
     });
   }
   return {$schema: schema, width: sizes.plotWidth, height: sizes.plotHeight, data: {values}, layer: layers} as TopLevelSpec;
+}
+
+/**
+ * More categories than the palette has colours: one panel per group with the
+ * categories named on its x axis, in one colour, so no two categories ever
+ * share a colour in a legend.
+ */
+function panelledBars(input: BarChartInput, groups: readonly string[], categories: readonly string[]): TopLevelSpec {
+  return {
+    $schema: schema,
+    data: {values: input.bars.map((b) => ({group: b.group, category: b.category, value: b.value}))},
+    mark: {type: 'bar', opacity: 0.85, color: palette[0]},
+    width: Math.max(60, Math.round(sizes.plotWidth / groups.length)),
+    height: sizes.plotHeight,
+    encoding: {
+      column: {field: 'group', type: 'nominal', title: input.xTitle, sort: [...groups], header: {labelFontSize: sizes.label, titleFontSize: sizes.axisTitle}},
+      x: {field: 'category', type: 'nominal', title: input.categoryTitle ?? null, sort: [...categories], axis: {labelAngle: -45}},
+      y: {field: 'value', type: 'quantitative', title: input.yTitle, axis: {tickMinStep: 1}},
+    },
+  } as TopLevelSpec;
 }

@@ -100,7 +100,10 @@ export function coefficientsChart(block: ComputedBlock): ChartDraft | undefined 
     const i = block.design.kind === 'bivariate' ? block.design.x.findIndex((x) => x.label === term) : -1;
     return i >= 0 ? (names.samples[i] ?? term) : term;
   };
-  const rows = slopes.map((c) => ({label: label(c.term), estimate: c.estimate, ci: c.ci}));
+  // Two columns may share a label in the dataset; their column names never clash.
+  const labels = slopes.map((c) => label(c.term));
+  const distinct = new Set(labels).size === labels.length;
+  const rows = slopes.map((c, i) => ({label: distinct ? labels[i]! : c.term, estimate: c.estimate, ci: c.ci}));
   const parts = slopes.map((c) => `${label(c.term)} ${formatFixed(c.estimate, slopeDecimals(c.ci))} (${intervalText(c.ci, slopeDecimals(c.ci), spec.confidence)})`);
   const yName = names.samples[names.samples.length - 1] ?? names.outcome;
   return {

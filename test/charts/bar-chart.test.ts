@@ -42,9 +42,17 @@ describe('barChartSpec', () => {
     await expect(first.svg).toMatchFileSnapshot('./__snapshots__/bar-chart.svg');
   });
 
-  it('rejects no bars and more categories than colours', () => {
+  it('gives each group a panel when there are more categories than colours', async () => {
+    const many = ['g', 'h'].flatMap((group) => Array.from({length: 7}, (_, i) => ({group, category: `c${i}`, value: i + 1})));
+    const {svg, warnings} = await renderSvg(barChartSpec({bars: many, xTitle: 'Site', yTitle: 'Count'}), options);
+    expect(warnings).toEqual([]);
+    expect(svg.match(/<path [^>]*fill="#265EA9"/g)).toHaveLength(14);
+    expect(svg).not.toContain('role-legend');
+  });
+
+  it('rejects no bars, and intervals with more categories than colours', () => {
     expect(() => barChartSpec({bars: [], xTitle: 'x', yTitle: 'y'})).toThrow(/at least one/);
-    const many = Array.from({length: 7}, (_, i) => ({group: 'g', category: `c${i}`, value: i}));
+    const many = Array.from({length: 7}, (_, i) => ({group: 'g', category: `c${i}`, value: i, ci: [0, 1] as const}));
     expect(() => barChartSpec({bars: many, xTitle: 'x', yTitle: 'y'})).toThrow(/categories/);
   });
 });

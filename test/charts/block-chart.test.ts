@@ -143,6 +143,17 @@ describe('blockChart with chart: auto', () => {
     expect(markdown).toContain('](charts/b-anova-pairs.svg)');
   });
 
+  it('describes every chart by the wording rules of contract §7', () => {
+    const forbidden = /accept(ed)? the null|prove[sd]?|no difference|probability that the null|due to chance|marginally significant|trend toward|p = \.000|observed power/i;
+    const svgs = [...compiled.files].filter(([f]) => f.endsWith('.svg'));
+    expect(svgs.length).toBeGreaterThanOrEqual(28);
+    for (const [file, svg] of svgs) {
+      expect(descOf(svg).length, file).toBeGreaterThan(40);
+      expect(descOf(svg), file).not.toMatch(forbidden);
+      expect(descOf(svg), file).not.toMatch(/NaN|undefined|Infinity/);
+    }
+  });
+
   it('writes the same bytes on a second compile', async () => {
     const again = await compileBlocks();
     for (const [file, text] of compiled.files) if (file.startsWith('charts/')) expect(again.files.get(file), file).toBe(text);
