@@ -23,9 +23,10 @@ export interface BoxPlotInput {
   readonly paired?: boolean;
   /**
    * One interval per sample, drawn as a bar through its marker (e.g. the
-   * mean's t interval); infinite bounds are cut at the plot's edge.
+   * mean's t interval); infinite bounds are cut at the plot's edge, and a
+   * sample without one (undefined) shows its marker alone.
    */
-  readonly intervals?: readonly (readonly [number, number])[];
+  readonly intervals?: readonly (readonly [number, number] | undefined)[];
   /**
    * The centre marked per sample (default: the mean, by `summarize`); give
    * it when the interval is about another estimate (a Hodges–Lehmann shift).
@@ -204,7 +205,7 @@ export function boxPlotLayer(input: BoxPlotInput) {
         encoding: {x, y, color},
       },
       ...(input.intervals
-        ? [{name: `${pre}intervals`, data: {values: centreRows}, mark: {type: 'rule' as const, color: ink.text, strokeWidth: 1.5}, encoding: {x: sideX, y: {...y, field: 'lower'}, y2: {field: 'upper'}}}]
+        ? [{name: `${pre}intervals`, data: {values: centreRows}, transform: [{filter: 'isValid(datum.lower)'}], mark: {type: 'rule' as const, color: ink.text, strokeWidth: 1.5}, encoding: {x: sideX, y: {...y, field: 'lower'}, y2: {field: 'upper'}}}]
         : []),
       {
         name: `${pre}means`,

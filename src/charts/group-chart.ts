@@ -28,19 +28,20 @@ export function groupChart(block: ComputedBlock, boxes: boolean): ChartDraft {
   const drawn = boxes
     ? 'Every observation is a point; boxes show the quartiles and median, whiskers reach the furthest point within 1.5 IQR of the box'
     : 'Every observation is a point';
-  const description =
-    `${boxes ? 'Box plot' : 'Strip plot'} of ${withUnits(names.outcome, units)}${byText}: ${parts.join('; ')}. ` +
-    `${drawn}; a diamond with a bar beside each group marks its mean and ${level} confidence interval.`;
   // Groups without an interval (one value, no spread) show the mean alone.
   const complete = intervals.every((ci) => ci !== undefined);
+  const description =
+    `${boxes ? 'Box plot' : 'Strip plot'} of ${withUnits(names.outcome, units)}${byText}: ${parts.join('; ')}. ` +
+    `${drawn}; a diamond with a bar beside each group marks its mean and ${level} confidence interval` +
+    `${complete ? '' : ' (a group with one value or no spread has its mean alone)'}.`;
   return {
     spec: boxPlotSpec({
       samples,
       yTitle: outcome,
       ...(units ? {units} : {}),
       boxes,
-      ...(complete ? {intervals: intervals as (readonly [number, number])[]} : {}),
-      centreLabel: complete ? `mean and ${level} CI` : 'mean',
+      intervals,
+      centreLabel: `mean and ${level} CI`,
     }),
     title: spec.caption ?? `${outcome}${byText}`,
     description,

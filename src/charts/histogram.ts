@@ -21,8 +21,8 @@ export interface HistogramInput {
 
 /**
  * Counts per bin are vega's `bin` transform: deterministic nice edges of
- * width 1, 2 or 5 × 10ᵏ. The interval sits at a fixed height near the top
- * of the plot, its infinite bound (one-sided) cut at the edge of the data.
+ * width 1, 2 or 5 × 10ᵏ. The interval sits just above the plotting area,
+ * its infinite bound (one-sided) cut at the edge of the data.
  */
 export function histogramSpec(input: HistogramInput): TopLevelSpec {
   const values = Array.from(input.values).filter(Number.isFinite);
@@ -50,11 +50,12 @@ export function histogramSpec(input: HistogramInput): TopLevelSpec {
   if (input.estimate) {
     const drawn = clampInterval(input.estimate.ci, extent);
     const row = {values: [{value: input.estimate.value, lower: drawn.lower, upper: drawn.upper, label: input.estimate.label}]};
-    const y = 10;
+    // Above the plotting area, so no bar can hide it (autosize pads the view to fit).
+    const y = -14;
     layers.push(
       {name: 'interval', data: row, mark: {type: 'rule', color: ink.text, strokeWidth: 1.5, y}, encoding: {x: {...x, field: 'lower'}, x2: {field: 'upper'}}},
       {name: 'estimate', data: row, mark: {type: 'point', shape: 'diamond', size: sizes.meanSymbol, filled: true, fill: 'white', stroke: ink.text, strokeWidth: 1.5, opacity: 1, y}, encoding: {x}},
-      {name: 'estimate-label', data: row, mark: {type: 'text', align: 'left', dx: 6, y: y + 12, fontSize: sizes.label, color: ink.label}, encoding: {x: {...x, field: 'lower'}, text: {field: 'label'}}},
+      {name: 'estimate-label', data: row, mark: {type: 'text', align: 'left', baseline: 'middle', dx: 8, y, fontSize: sizes.label, color: ink.label}, encoding: {x: {...x, field: 'upper'}, text: {field: 'label'}}},
     );
   }
   return {

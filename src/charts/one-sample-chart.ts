@@ -20,7 +20,7 @@ export function histogramChart(block: ComputedBlock, sample: Sample): ChartDraft
   const ci = outcome?.estimate?.ci ?? meanInterval(values, spec.confidence);
   const level = outcome?.estimate?.level ?? spec.confidence;
   const name = outcome?.estimate?.name ?? 'mean';
-  const estimate = ci ? {value: outcome?.estimate?.value ?? mean, ci, label: `${name}, ${levelText(level)} CI`} : undefined;
+  const estimate = ci ? {value: outcome?.estimate?.value ?? mean, ci, label: `${name}, ${ci.some((b) => !Number.isFinite(b)) ? 'one-sided ' : ''}${levelText(level)} CI`} : undefined;
   const reference = spec.mu === undefined ? undefined : {value: spec.mu, label: `μ₀ = ${quantity(spec.mu, decimals - 1 < 0 ? 0 : decimals - 1, units)}`};
   const parts = [
     `Histogram of ${withUnits(names.outcome, units)}, n = ${n}, median ${quantity(median, decimals, units)}.`,

@@ -65,6 +65,12 @@ describe('boxPlotSpec', () => {
     for (const r of rows) expect(Number(r['side'])).toBeGreaterThan(Number(r['box']));
   });
 
+  it('shows a mean alone where a group has no interval', async () => {
+    const {svg} = await renderSvg(boxPlotSpec({samples: mixes, yTitle: 'Strength', intervals: [[30, 32.5], undefined, [29, 31]]}), options);
+    expect(items(svg, 'intervals')).toHaveLength(2);
+    expect(items(svg, 'means')).toHaveLength(3);
+  });
+
   it('draws a strip plot without boxes, and a dashed reference line', async () => {
     const {svg} = await renderSvg(boxPlotSpec({samples: mixes, yTitle: 'Strength', boxes: false, reference: 30}), options);
     // Boxes are the only translucent rectangles.
