@@ -10,8 +10,10 @@ import type {VFileMessage} from 'vfile-message';
 import {reportError} from './document/report-error.js';
 import {readPlanHistory, type PlanHistory} from './lock/plan-history.js';
 import type {BlockCache} from './cache/block-cache.js';
+import {familyChartPath} from './charts/family-charts.js';
 import remarkStet, {type StetData} from './remark-stet.js';
 import {appendixFiles} from './render/appendix-files.js';
+import {familyFigureName} from './render/family-nodes.js';
 import {htmlPage} from './render/html-page.js';
 import {resultsJson} from './render/results-json.js';
 import {tableFiles} from './render/table-files.js';
@@ -95,12 +97,22 @@ export async function compileReport(reportPath: string, options: CompileOptions 
   const builtAt = (options.now ?? (() => new Date()))().toISOString();
   if (formats.has('md')) files.set(`${name}.md`, toMarkdown(tree, data.settings.passthrough));
   if (formats.has('html')) {
-    const body = await toHtmlBody(tree, data.charts, {allowHtml: options.allowHtml});
+    const moreCharts = new Map([...data.familyCharts].map(([family, chart]) => [familyFigureName(family), chart]));
+    const body = await toHtmlBody(tree, data.charts, {allowHtml: options.allowHtml, moreCharts});
     const page = {title, body, front: data.settings.passthrough, datasets: data.datasets, version, builtAt, templatePath: options.template};
     files.set(`${name}.html`, await htmlPage(page));
   }
   if (formats.has('json')) files.set(`${name}.results.json`, resultsJson(data, path.basename(absolute), version));
-  for (const [id, chart] of data.charts) files.set(`charts/${id}.svg`, chart.svg);
+  for (const [id, chart] of data.charts) {
+    for (const [name, drawn] of [[id, chart] as const, ...chart.extra.map((e) => [`${id}-${e.suffix}`, e] as const)]) {
+      files.set(`charts/${name}.svg`, drawn.svg);
+      files.set(`charts/${name}.vl.json`, drawn.vlSpec);
+    }
+  }
+  for (const [family, chart] of data.familyCharts) {
+    files.set(`${familyChartPath(family)}.svg`, chart.svg);
+    files.set(`${familyChartPath(family)}.vl.json`, chart.vlSpec);
+  }
   for (const [file, text] of tableFiles(data, formats, name, path.basename(absolute))) files.set(file, text);
   for (const [file, text] of await appendixFiles({data, formats, name, title, version, builtAt, templatePath: options.template})) files.set(file, text);
 

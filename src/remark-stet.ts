@@ -4,6 +4,8 @@ import {SKIP, visit} from 'unist-util-visit';
 import type {VFile} from 'vfile';
 import type {BlockCache} from './cache/block-cache.js';
 import {blockChart, type BlockChart} from './charts/block-chart.js';
+import {familyCharts} from './charts/family-charts.js';
+import type {RenderedChart} from './charts/render-draft.js';
 import {adjustFamilies} from './compute/adjust-families.js';
 import {computeBlock, type ComputedBlock} from './compute/compute-block.js';
 import type {Dataset} from './data/column.js';
@@ -12,6 +14,7 @@ import type {Disclosure} from './interpret/disclosure.js';
 import {interpretBlock, type InterpretedBlock} from './interpret/result-record.js';
 import {blockNodes} from './render/block-nodes.js';
 import {resolveCrossReferences} from './render/cross-references.js';
+import {familyNodes, familyPlacement} from './render/family-nodes.js';
 import {createFloatCounter, type FloatNumbers} from './render/float-numbers.js';
 import {resolveReferences} from './render/resolve-references.js';
 import {createDatasetLoader} from './resolve/load-datasets.js';
@@ -44,6 +47,8 @@ export interface StetData {
   readonly floats: FloatNumbers;
   /** Every valid block as declared (before `auto` is resolved), by id. */
   readonly specs: ReadonlyMap<string, BlockSpec>;
+  /** Forest plot by family name; written as `charts/family-NAME.svg`. */
+  readonly familyCharts: ReadonlyMap<string, RenderedChart>;
 }
 
 declare module 'vfile' {
@@ -122,21 +127,31 @@ export default function remarkStet(options: RemarkStetOptions = {}) {
 
     // 8. Charts.
     const charts = new Map<string, BlockChart>();
+    let families: ReadonlyMap<string, RenderedChart> = new Map();
     if (options.charts !== false) {
       for (const block of blocks.values()) {
         const render = () => blockChart(block);
         const chart = await attemptAsync(report, () => (options.cache ? options.cache.chart(block, render) : render()));
         if (chart) charts.set(block.computed.spec.id, chart);
       }
+      families = await familyCharts(blocks.values());
     }
 
     // 9. Replace each block by its output (failed blocks stay as written),
     //    numbering figures and tables in document order.
+    //    A family's forest plot follows the family's last block.
     const floats = createFloatCounter();
+    const familyAfter = familyPlacement(blocks.values(), families);
     visit(tree, 'code', (node: Code, index, parent) => {
       const block = blocks.get(specs.get(node)?.id ?? '');
       if (!parent || index === undefined || !block || computed.get(node) !== block.computed) return;
       const nodes = blockNodes(node, block, charts.get(block.computed.spec.id), floats);
+      const family = familyAfter.get(block.computed.spec.id);
+      const familyChart = family === undefined ? undefined : families.get(family);
+      if (family !== undefined && familyChart) {
+        const size = [...blocks.values()].filter((b) => b.computed.spec.family === family && b.computed.outcome?.estimate).length;
+        nodes.push(...familyNodes(family, familyChart, size, floats, node.position));
+      }
       parent.children.splice(index, 1, ...nodes);
       return [SKIP, index + nodes.length];
     });
@@ -146,7 +161,7 @@ export default function remarkStet(options: RemarkStetOptions = {}) {
     resolveCrossReferences(tree, floats, failed, report);
     resolveReferences(tree, blocks, failed, report);
 
-    file.data.stet = {settings, blocks, datasets: await loader.loaded(), charts, floats, specs: declared};
+    file.data.stet = {settings, blocks, datasets: await loader.loaded(), charts, familyCharts: families, floats, specs: declared};
   };
 }
 

@@ -112,9 +112,19 @@ describe('building the sample report', () => {
     expect(markdown).not.toContain('{{');
     expect(markdown).not.toContain('```stet');
     expect(html).not.toContain('{{');
-    const charted = ['supplier-28d', 'supplier-7d', 'curing', 'regimes'];
-    expect(html.match(/<svg/g)).toHaveLength(charted.length);
-    for (const id of charted) expect(await readFile(path.join(out, `charts/${id}.svg`), 'utf8')).toMatch(/^<svg/);
+    // regimes-pairs: the post-hoc comparisons after the regimes ANOVA.
+    const charted = ['supplier-28d', 'supplier-7d', 'curing', 'regimes', 'regimes-pairs', 'wc-slope'];
+    // …and the family's forest plot, placed after the family's last block.
+    expect(html.match(/<svg/g)).toHaveLength(charted.length + 1);
+    expect(html).toMatch(/<figure class="stet-chart" id="fig-family-suppliers"><svg[^]*?<figcaption class="stet-caption"><strong>Figure \d\.<\/strong> The 2 estimates of family “suppliers”/);
+    // Chart text is plain: no symbol marks from sentence formatting.
+    expect(html).not.toMatch(/[\uE000\uE001]/);
+    for (const id of charted) {
+      expect(await readFile(path.join(out, `charts/${id}.svg`), 'utf8')).toMatch(/^<svg/);
+      expect(JSON.parse(await readFile(path.join(out, `charts/${id}.vl.json`), 'utf8'))).toHaveProperty('$schema');
+    }
+    // The family's forest plot is written beside them.
+    expect(await readFile(path.join(out, 'charts/family-suppliers.svg'), 'utf8')).toMatch(/^<svg/);
     expect(html).toContain('Statistical significance is not a decision rule by itself');
     expect(html).toContain(results.datasets['cylinders']!.sha256);
   });

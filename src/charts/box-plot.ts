@@ -3,8 +3,11 @@
  * groups (and, with `paired`, the two conditions of a paired design).
  */
 import type {TopLevelSpec} from 'vega-lite';
+import {summarize} from '../methods/shared/summarize.js';
 import type {Sample} from '../methods/types.js';
-import {ink, palette, sizes} from './theme.js';
+import {boxStats} from './box-stats.js';
+import {clampInterval, extentOf} from './interval-bounds.js';
+import {ink, palette, schema, sizes} from './theme.js';
 
 export interface BoxPlotInput {
   /** One box per sample, in this order; labels must be distinct. */
@@ -18,6 +21,30 @@ export interface BoxPlotInput {
    * each subject's two values. Default false.
    */
   readonly paired?: boolean;
+  /**
+   * One interval per sample, drawn as a bar through its marker (e.g. the
+   * mean's t interval); infinite bounds are cut at the plot's edge, and a
+   * sample without one (undefined) shows its marker alone.
+   */
+  readonly intervals?: readonly (readonly [number, number] | undefined)[];
+  /**
+   * The centre marked per sample (default: the mean, by `summarize`); give
+   * it when the interval is about another estimate (a Hodges–Lehmann shift).
+   */
+  readonly centres?: readonly number[];
+  /** Legend text of the centre marker (default `mean`). */
+  readonly centreLabel?: string;
+  /** Draw boxes (default true); false gives a strip plot: points, centre and interval only. */
+  readonly boxes?: boolean;
+  /** A value to mark with a dashed horizontal rule, e.g. 0 for differences. */
+  readonly reference?: number;
+  /** Width of the plotting area in px (default `sizes.plotWidth`). */
+  readonly width?: number;
+  /**
+   * Prefix of the layer names (default none). vega-lite names marks and
+   * datasets by them, so two box plots in one chart need different prefixes.
+   */
+  readonly layerPrefix?: string;
 }
 
 interface Row {
@@ -29,10 +56,10 @@ interface Row {
   readonly subject: number;
 }
 
-const {plotWidth, plotHeight} = sizes;
+const {plotHeight} = sizes;
 
 /** Box width in px for `k` groups: 40% of a group's slot, between 14 and 44 px. */
-function boxWidth(k: number): number {
+function boxWidth(k: number, plotWidth: number): number {
   return Math.round(Math.min(44, Math.max(14, (0.4 * plotWidth) / k)));
 }
 
@@ -88,10 +115,11 @@ function rows(input: BoxPlotInput, spread: number): Row[] {
  * Convention (Tukey 1977, "Exploratory Data Analysis", ch. 2): the box spans
  * the first to the third quartile with a line at the median; whiskers reach
  * the most extreme observation within 1.5 × IQR of the box. Quartiles are
- * vega's (d3 `quantileSorted`): Hyndman & Fan (1996) type 7, the default of
- * R and numpy. Points beyond the whiskers are not drawn twice: every
+ * Hyndman & Fan (1996) type 7, the default of R and numpy (box-stats.ts).
+ * Points beyond the whiskers are not drawn twice: every
  * observation is already a point, jittered horizontally by `jitter(row)`.
- * The mean is an open diamond. Non-finite values are left out.
+ * The mean (or the given centre) is an open diamond beside the box, with its
+ * interval as a bar through it when given. Non-finite values are left out.
  *
  * Groups sit at x = 0, 1, …, k − 1 on a linear scale rather than a band
  * scale: vega-lite splits a line at every band (`pathGroupingFields`), which
@@ -100,13 +128,30 @@ function rows(input: BoxPlotInput, spread: number): Row[] {
  * cut with an ellipsis when wider than their slot (say them in the caption).
  */
 export function boxPlotSpec(input: BoxPlotInput): TopLevelSpec {
+  return {$schema: schema, ...boxPlotLayer(input)} as TopLevelSpec;
+}
+
+/** The box plot as a layer spec without `$schema`, to place in a concatenation. */
+export function boxPlotLayer(input: BoxPlotInput) {
   const k = input.samples.length;
   if (k === 0) throw new Error('boxPlotSpec: needs at least one sample');
   const labels = input.samples.map((s) => s.label);
   if (new Set(labels).size !== k) throw new Error(`boxPlotSpec: sample labels must be distinct, got ${labels.join(', ')}`);
   const yTitle = input.units ? `${input.yTitle} (${input.units})` : input.yTitle;
+  if (input.intervals && input.intervals.length !== k) throw new Error(`boxPlotSpec: ${input.intervals.length} intervals for ${k} samples`);
+  if (input.centres && input.centres.length !== k) throw new Error(`boxPlotSpec: ${input.centres.length} centres for ${k} samples`);
+  const plotWidth = input.width ?? sizes.plotWidth;
+  const pre = input.layerPrefix ?? '';
   const slot = plotWidth / k;
-  const box = boxWidth(k);
+  const box = boxWidth(k, plotWidth);
+  const data = rows(input, (0.4 * box) / slot);
+  const centres = input.centres ?? input.samples.map((s) => summarize(s.values.filter(Number.isFinite)).mean);
+  const extent = extentOf([...data.map((r) => r.value), ...centres, ...(input.reference === undefined ? [] : [input.reference])]);
+  const centreRows = centres.map((centre, i) => {
+    const ci = input.intervals?.[i];
+    // Beside the box, so the interval never hides the median or the whiskers.
+    return {box: i, side: Math.round((i + (box / 2 + 9) / slot) * 1e4) / 1e4, centre, ...(ci ? clampInterval(ci, extent) : {})};
+  });
 
   const x = {
     field: 'x',
@@ -115,53 +160,66 @@ export function boxPlotSpec(input: BoxPlotInput): TopLevelSpec {
     axis: {title: null, labels: false, ticks: false, grid: false, values: []},
   };
   const boxX = {...x, field: 'box'};
+  const sideX = {...x, field: 'side'};
   const y = {field: 'value', type: 'quantitative' as const, title: yTitle, scale: {zero: false, nice: true, padding: 10}};
   const color = {field: 'box', type: 'ordinal' as const, scale: {domain: labels.map((_, i) => i), range: [...palette]}, legend: null};
 
   const pairLines = {
-    name: 'pairs',
+    name: `${pre}pairs`,
     mark: {type: 'line' as const, color: ink.pair, strokeWidth: 0.75},
     encoding: {x, y, detail: {field: 'subject', type: 'nominal' as const}},
   };
 
+  // Boxes drawn from our own quartiles (box-stats.ts) with plain marks: the
+  // same convention as vega-lite's composite boxplot at a third of the cost.
+  const half = box / 2 / slot;
+  const stats = input.samples.map((s) => boxStats(s.values));
+  const boxRows = stats.flatMap((st, i) => (st ? [{box: i, left: i - half, right: i + half, ...st}] : []));
+  // Whiskers and their caps, two per box, in one dataset each.
+  const whiskerRows = boxRows.flatMap((r) => [
+    {box: r.box, from: r.q1, to: r.lowerWhisker, capLeft: r.box - half / 2, capRight: r.box + half / 2},
+    {box: r.box, from: r.q3, to: r.upperWhisker, capLeft: r.box - half / 2, capRight: r.box + half / 2},
+  ]);
+  const span = (field: string) => ({...x, field});
+  const boxLayers = [
+    {name: `${pre}whiskers`, data: {values: whiskerRows}, mark: {type: 'rule' as const, color: ink.rule}, encoding: {x: boxX, y: {...y, field: 'from'}, y2: {field: 'to'}}},
+    {name: `${pre}caps`, data: {values: whiskerRows}, mark: {type: 'rule' as const, color: ink.rule}, encoding: {x: span('capLeft'), x2: {field: 'capRight'}, y: {...y, field: 'to'}}},
+    {name: `${pre}boxes`, data: {values: boxRows}, mark: {type: 'rect' as const, fillOpacity: 0.12, stroke: ink.rule, strokeWidth: 1}, encoding: {x: span('left'), x2: {field: 'right'}, y: {...y, field: 'q1'}, y2: {field: 'q3'}, color}},
+    {name: `${pre}medians`, data: {values: boxRows}, mark: {type: 'rule' as const, color: ink.text, strokeWidth: 1.5}, encoding: {x: span('left'), x2: {field: 'right'}, y: {...y, field: 'median'}}},
+  ];
+  const centreY = {...y, field: 'centre'};
+  const legend = {title: null, orient: 'top' as const, direction: 'horizontal' as const};
   return {
-    $schema: 'https://vega.github.io/schema/vega-lite/v6.json',
     width: plotWidth,
     height: plotHeight,
-    data: {values: rows(input, (0.4 * box) / slot)},
+    data: {values: data},
     layer: [
+      ...(input.reference === undefined
+        ? []
+        : [{name: `${pre}reference`, data: {values: [{reference: input.reference}]}, mark: {type: 'rule' as const, color: ink.rule, strokeDash: [4, 3]}, encoding: {y: {...y, field: 'reference'}}}]),
       ...(input.paired ? [pairLines] : []),
+      ...(input.boxes === false ? [] : boxLayers),
       {
-        mark: {
-          type: 'boxplot',
-          orient: 'vertical',
-          extent: 1.5,
-          outliers: false,
-          size: box,
-          box: {fillOpacity: 0.12, stroke: ink.rule, strokeWidth: 1},
-          median: {color: ink.text, strokeWidth: 1.5},
-          rule: {color: ink.rule},
-          ticks: {color: ink.rule, size: box / 2},
-        },
-        encoding: {x: boxX, y, color},
-      },
-      {
-        name: 'points',
+        name: `${pre}points`,
         mark: {type: 'circle', size: sizes.point, opacity: 0.85, stroke: 'white', strokeWidth: 0.5},
         encoding: {x, y, color},
       },
+      ...(input.intervals
+        ? [{name: `${pre}intervals`, data: {values: centreRows}, transform: [{filter: 'isValid(datum.lower)'}], mark: {type: 'rule' as const, color: ink.text, strokeWidth: 1.5}, encoding: {x: sideX, y: {...y, field: 'lower'}, y2: {field: 'upper'}}}]
+        : []),
       {
-        name: 'means',
-        mark: {type: 'point', size: sizes.meanSymbol, filled: true, fill: 'white', stroke: ink.text, strokeWidth: 1.5},
+        name: `${pre}means`,
+        data: {values: centreRows},
+        mark: {type: 'point', size: sizes.meanSymbol, filled: true, fill: 'white', stroke: ink.text, strokeWidth: 1.5, opacity: 1},
         encoding: {
-          x: boxX,
-          y: {...y, aggregate: 'mean'},
+          x: sideX,
+          y: centreY,
           // A one-entry legend says what the diamond is.
-          shape: {datum: 'mean', type: 'nominal' as const, scale: {range: ['diamond']}, legend: {title: null, orient: 'top' as const, direction: 'horizontal' as const}},
+          shape: {datum: input.centreLabel ?? 'mean', type: 'nominal' as const, scale: {range: ['diamond']}, legend},
         },
       },
       {
-        name: 'group-labels',
+        name: `${pre}group-labels`,
         data: {values: labels.map((label, i) => ({label, box: i}))},
         mark: {type: 'text', baseline: 'top', fontSize: sizes.label, color: ink.label, limit: slot - 8, y: plotHeight + 6},
         encoding: {x: boxX, text: {field: 'label', type: 'nominal' as const}},
@@ -169,3 +227,4 @@ export function boxPlotSpec(input: BoxPlotInput): TopLevelSpec {
     ],
   };
 }
+

@@ -51,6 +51,9 @@ export const sizes = {
   meanSymbol: 70,
 } as const;
 
+/** The vega-lite schema every written `.vl.json` names, so editors can check it. */
+export const schema = 'https://vega.github.io/schema/vega-lite/v6.json';
+
 export const stetConfig: Config = {
   font: fontStack,
   background: 'white',

@@ -263,6 +263,12 @@ export const wording = {
     `${count} specifications of this comparison were evaluated while this report was written; see the appendix.`,
   planNote: (plan: 'confirmatory' | 'exploratory') =>
     plan === 'confirmatory' ? 'Plan: confirmatory (as locked in stet.lock).' : 'Plan: exploratory (not in stet.lock, or changed since it was locked).',
+
+  // Captions of figures that are not a block's main chart.
+  pairsCaption: (outcome: string, by: string) =>
+    `Pairwise differences in ${outcome}${by ? ` between levels of ${by}` : ''}, with simultaneous intervals; a pair whose interval excludes zero differs.`,
+  familyCaption: (family: string, size: number) =>
+    `The ${size} estimates of family “${family}” with their unadjusted intervals; decisions use the adjusted p-values given in each block.`,
 } as const;
 
 export type Direction = 'higher' | 'lower' | 'none';

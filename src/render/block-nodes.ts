@@ -2,7 +2,7 @@ import type {Code, Paragraph, PhrasingContent, RootContent} from 'mdast';
 import {styleNamed} from '../interpret/number-style.js';
 import type {InterpretedBlock} from '../interpret/result-record.js';
 import type {FloatCounter} from './float-numbers.js';
-import {wording} from '../interpret/wording.js';
+import {capitalize, wording} from '../interpret/wording.js';
 import {resultsTables} from './results-tables.js';
 
 /**
@@ -12,7 +12,12 @@ import {resultsTables} from './results-tables.js';
  * numbered caption below. Every node keeps the block's position so
  * messages point at it.
  */
-export function blockNodes(code: Code, block: InterpretedBlock, chart: {alt: string} | undefined, floats: FloatCounter): RootContent[] {
+export function blockNodes(
+  code: Code,
+  block: InterpretedBlock,
+  chart: {alt: string; extra?: readonly {suffix: string; alt: string}[]} | undefined,
+  floats: FloatCounter,
+): RootContent[] {
   const {spec} = block.computed;
   const position = code.position;
   const nodes: RootContent[] = [];
@@ -41,6 +46,14 @@ export function blockNodes(code: Code, block: InterpretedBlock, chart: {alt: str
       children: [{type: 'image', url: `charts/${spec.id}.svg`, alt: chart.alt, title: null, position}],
     });
     nodes.push(caption(block, 'Figure', floats.figure(spec.id), 'fig', position));
+    // Extra charts (post-hoc pairs) follow as figures of their own: `charts/ID-SUFFIX.svg`.
+    for (const extra of chart.extra ?? []) {
+      const name = `${spec.id}-${extra.suffix}`;
+      nodes.push(
+        {type: 'paragraph', position, children: [{type: 'image', url: `charts/${name}.svg`, alt: extra.alt, title: null, position}]},
+        captionParagraph(`Figure ${floats.figure(name)}.`, extraCaption(block, extra.suffix), `fig-${name}-caption`, 'fig', position),
+      );
+    }
   }
   return nodes;
 }
@@ -48,20 +61,26 @@ export function blockNodes(code: Code, block: InterpretedBlock, chart: {alt: str
 /** "Table 2. caption" — the block's own caption, or one from its method and columns. */
 function caption(block: InterpretedBlock, word: string, number: number, kind: 'tab' | 'fig', position: Code['position']): Paragraph {
   const {spec, title, names} = block.computed;
-  const text = spec.caption ?? `${capitalise(title)}: ${names.outcome}${names.by ? ` by ${names.by}` : ''}.`;
+  const text = spec.caption ?? `${capitalize(title)}: ${names.outcome}${names.by ? ` by ${names.by}` : ''}.`;
+  return captionParagraph(`${word} ${number}.`, text, `${kind}-${spec.id}${kind === 'fig' ? '-caption' : ''}`, kind, position);
+}
+
+function extraCaption(block: InterpretedBlock, suffix: string): string {
+  const {names} = block.computed;
+  return suffix === 'pairs' ? wording.pairsCaption(names.outcome, names.by) : `${capitalize(block.computed.title)}: ${suffix}.`;
+}
+
+/** A numbered caption: the label in bold, then the text; its id lets `{{fig:…}}`/`{{tab:…}}` link to it. */
+export function captionParagraph(label: string, text: string, id: string, kind: 'tab' | 'fig', position?: Code['position']): Paragraph {
   return {
     type: 'paragraph',
     position,
-    data: {hProperties: {className: ['stet-caption', `stet-${kind}-caption`], id: `${kind}-${spec.id}${kind === 'fig' ? '-caption' : ''}`}},
+    data: {hProperties: {className: ['stet-caption', `stet-${kind}-caption`], id}},
     children: [
-      {type: 'strong', children: [{type: 'text', value: `${word} ${number}.`}]},
+      {type: 'strong', children: [{type: 'text', value: label}]},
       {type: 'text', value: ` ${text}`},
     ],
   };
-}
-
-function capitalise(text: string): string {
-  return text.charAt(0).toUpperCase() + text.slice(1);
 }
 
 /** Adjacent text segments (upright symbols) as one node, as Markdown would parse them. */

@@ -11,6 +11,8 @@ import type {BlockChart} from '../charts/block-chart.js';
 export interface HtmlBodyOptions {
   /** Keep the author's raw HTML as written (default: sanitised). */
   allowHtml?: boolean | undefined;
+  /** Charts that belong to no block (family forest plots), by file name without `.svg`. */
+  moreCharts?: ReadonlyMap<string, {svg: string}> | undefined;
 }
 
 /**
@@ -34,7 +36,7 @@ export async function toHtmlBody(tree: Root, charts: ReadonlyMap<string, BlockCh
   if (!options.allowHtml) processor.use(rehypeSanitize, schema);
   const hast = (await processor.run(structuredClone(tree))) as HastRoot;
   restoreStetIds(hast);
-  inlineCharts(hast, charts);
+  inlineCharts(hast, charts, options.moreCharts ?? new Map());
   return unified().use(rehypeStringify, {allowDangerousHtml: true}).stringify(hast);
 }
 
@@ -54,7 +56,13 @@ function restoreStetIds(hast: HastRoot): void {
  * `<figure id="fig-ID">SVG<figcaption>…</figcaption></figure>`, so the
  * chart and its caption print on one page.
  */
-function inlineCharts(hast: HastRoot, charts: ReadonlyMap<string, BlockChart>): void {
+function inlineCharts(hast: HastRoot, blockCharts: ReadonlyMap<string, BlockChart>, more: ReadonlyMap<string, {svg: string}>): void {
+  // Every chart file by name: a block's own, its extras (`ID-pairs`) and family plots (`family-NAME`).
+  const charts = new Map<string, {svg: string}>(more);
+  for (const [id, chart] of blockCharts) {
+    charts.set(id, chart);
+    for (const extra of chart.extra) charts.set(`${id}-${extra.suffix}`, extra);
+  }
   visit(hast, 'element', (node: Element, index, parent) => {
     if (node.tagName !== 'p' || !parent || index === undefined) return;
     const image = node.children.find((child): child is Element => child.type === 'element' && child.tagName === 'img');
