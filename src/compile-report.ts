@@ -7,6 +7,7 @@ import {unified} from 'unified';
 import type {Root} from 'mdast';
 import {VFile} from 'vfile';
 import type {VFileMessage} from 'vfile-message';
+import {lintReport} from './lint/lint-report.js';
 import remarkStet, {type StetData} from './remark-stet.js';
 import {htmlPage} from './render/html-page.js';
 import {resultsJson} from './render/results-json.js';
@@ -53,6 +54,8 @@ export interface CompiledReport {
  *   read → parse (remark) → remarkStet (resolve data, compute, interpret)
  *        → render Markdown, HTML, JSON, charts
  *
+ *        → lint the author's prose against the results (errors fail it)
+ *
  * Nothing is written; `buildReport` writes, `stet check` compares.
  */
 export async function compileReport(reportPath: string, options: CompileOptions = {}): Promise<CompiledReport> {
@@ -66,7 +69,11 @@ export async function compileReport(reportPath: string, options: CompileOptions 
   const parser = unified().use(remarkParse).use(remarkGfm).use(remarkFrontmatter, ['yaml']).use(remarkStet, {
     allowOutside: options.allowOutside,
   });
-  const tree = (await parser.run(parser.parse(file), file)) as Root;
+  const parsed = parser.parse(file);
+  // The lint reads the author's prose as written, before blocks and references are replaced.
+  const source = structuredClone(parsed);
+  const tree = (await parser.run(parsed, file)) as Root;
+  if (file.data.stet && !file.messages.some((message) => message.fatal)) lintReport(source, file, file.data.stet);
   const messages = [...file.messages].sort((a, b) => (a.line ?? 0) - (b.line ?? 0) || (a.column ?? 0) - (b.column ?? 0));
   const data = file.data.stet;
   const failed = {ok: false, messages, files: new Map<string, string>(), outDir, reportPath: absolute, name, data};

@@ -2,6 +2,7 @@ import {isScalar} from 'yaml';
 import {defaultDatasetOptions, normalizeDelimiter, type DatasetOptions} from '../data/dataset-options.js';
 import {mappingEntries, parseYamlAt} from '../document/yaml-at.js';
 import {UserError, type Place} from '../user-error.js';
+import {parseLintSettings} from './parse-lint-settings.js';
 import {didYouMean} from './suggest.js';
 import {levelRules, readChoice, readNumber, readString, readStringList, type ValueContext} from './read-value.js';
 
@@ -23,6 +24,8 @@ export interface DocumentSettings {
   readonly confidence: number;
   readonly adjust: AdjustMethod;
   readonly datasets: ReadonlyMap<string, DatasetDeclaration>;
+  /** Lint rules switched off (`lint: {off: [...]}`). */
+  readonly lintOff: ReadonlySet<string>;
   /** Front matter without the `stet` key, for the Markdown output. */
   readonly passthrough: Readonly<Record<string, unknown>>;
 }
@@ -33,10 +36,11 @@ export const defaultSettings: DocumentSettings = {
   confidence: 0.95,
   adjust: 'none',
   datasets: new Map(),
+  lintOff: new Set(),
   passthrough: {},
 };
 
-const settingKeys = ['alpha', 'confidence', 'adjust', 'datasets'];
+const settingKeys = ['alpha', 'confidence', 'adjust', 'datasets', 'lint'];
 const datasetKeys = ['file', 'delimiter', 'decimal', 'missing', 'types', 'units', 'labels'];
 
 /** @param origin Report position of the first line inside the `---` fences. */
@@ -57,6 +61,7 @@ export function parseSettings(text: string, origin: Place): DocumentSettings {
     else if (key === 'confidence') settings = {...settings, confidence: readNumber(context, levelRules.confidence)};
     else if (key === 'adjust') settings = {...settings, adjust: readChoice(context, adjustMethods)};
     else if (key === 'datasets') settings = {...settings, datasets: parseDatasets(context)};
+    else if (key === 'lint') settings = {...settings, lintOff: parseLintSettings(context)};
     else {
       throw new UserError(`unknown setting \`${key}\` under \`stet\``, {
         ruleId: 'unknown-setting',

@@ -1,0 +1,30 @@
+import type {InterpretedBlock} from '../interpret/result-record.js';
+import type {LintContext, ProseSentence} from './types.js';
+
+/** Where a sentence turns from one finding to another. */
+const turn = /;|\b(?:but|whereas|while|although|though|however|yet|unlike)\b/gi;
+
+/**
+ * The tested blocks a phrase at `at` speaks about: those cited in its part of
+ * the sentence (parts split where the argument turns, "A was significant but
+ * B was not"), else the one block the whole sentence is about. References to
+ * one comparison of a block (`posthoc`, `coefficients`) are not about the
+ * block's decision and are left out.
+ */
+export function blocksAt(sentence: ProseSentence, at: number, context: LintContext): InterpretedBlock[] {
+  const bounds = [0, ...[...sentence.masked.matchAll(turn)].map((match) => match.index), sentence.masked.length];
+  let from = 0;
+  let to = sentence.masked.length;
+  for (let i = 0; i + 1 < bounds.length; i++) {
+    if (at >= bounds[i]! && at < bounds[i + 1]!) [from, to] = [bounds[i]!, bounds[i + 1]!];
+  }
+  const referenced = new Set(sentence.references.map((reference) => reference.id));
+  const cited = sentence.references.filter((reference) => !['posthoc', 'coefficients'].includes(reference.path[0] ?? ''));
+  const near = cited.filter((reference) => reference.start >= from && reference.end <= to);
+  const implicit = sentence.blockIds.filter((id) => !referenced.has(id));
+  const anywhere = new Set([...cited.map((reference) => reference.id), ...implicit]);
+  const distinct = near.length > 0 ? [...new Set(near.map((reference) => reference.id))] : anywhere.size === 1 ? [...anywhere] : [];
+  return distinct
+    .map((id) => context.blocks.get(id))
+    .filter((block): block is InterpretedBlock => block?.result.decision !== undefined);
+}
