@@ -55,12 +55,18 @@ export function lintSentences(sentences: readonly ProseSentence[], context: Lint
           start: sentence.placeOf(found.start),
           end: sentence.placeOf(found.end),
           message: found.message,
-          suggestion: found.suggestion ?? rule.suggestion,
+          suggestion: found.suggestion ?? withBlockId(rule.suggestion, sentence),
         });
       }
     }
   }
   return findings;
+}
+
+/** The general suggestion's `{{ID…}}`, with the block the sentence cites. */
+function withBlockId(suggestion: string, sentence: ProseSentence): string {
+  const id = sentence.blockIds[0];
+  return id === undefined ? suggestion : suggestion.replaceAll('{{ID', `{{${id}`);
 }
 
 function lintDocument(context: LintContext, rules: readonly LintRule[]): LintFinding[] {
