@@ -4,7 +4,7 @@ import type {StetData} from '../remark-stet.js';
 import type {Place} from '../user-error.js';
 import {proseSentences} from './prose-sentences.js';
 import {lintRules} from './rules/index.js';
-import type {LintContext, LintRule, LintSeverity, ProseSentence} from './types.js';
+import type {LintContext, LintRule, LintSeverity, ProseSentence, SentenceFinding} from './types.js';
 
 /** Messages of `stet lint` carry this source, apart from the build's own. */
 export const lintSource = 'stet-lint';
@@ -48,7 +48,7 @@ export function lintSentences(sentences: readonly ProseSentence[], context: Lint
   for (const sentence of sentences) {
     for (const rule of rules) {
       if (!rule.checkSentence || sentence.disabled.has(rule.id)) continue;
-      for (const found of rule.checkSentence(sentence, context)) {
+      for (const found of withoutOverlaps(rule.checkSentence(sentence, context))) {
         findings.push({
           rule: rule.id,
           severity: rule.severity,
@@ -61,6 +61,15 @@ export function lintSentences(sentences: readonly ProseSentence[], context: Lint
     }
   }
   return findings;
+}
+
+/** One finding per stretch of text: a rule's patterns may overlap ("chance … due to chance"). */
+function withoutOverlaps(findings: readonly SentenceFinding[]): SentenceFinding[] {
+  const kept: SentenceFinding[] = [];
+  for (const found of [...findings].sort((a, b) => a.start - b.start)) {
+    if (!kept.some((other) => found.start < other.end && other.start < found.end)) kept.push(found);
+  }
+  return kept;
 }
 
 /** The general suggestion's `{{ID…}}`, with the block the sentence cites. */

@@ -14,6 +14,8 @@ const notSignificant = /\b(?:not\s+(?:statistically\s+)?significant(?:ly)?|non-?
 /** Phrases that say the result was significant, unless negated. */
 const significant = /\b(?:(?:statistically\s+)?significant(?:ly)?(?!\s+(?:portion|number|amount|part|share|proportion|fraction|time|cost|effort|level)\b)|(?:reached|reaches|achieved|attained)\s+(?:statistical\s+)?significance|(?:we\s+)?reject(?:s|ed)?\s+the\s+null|null\s+hypothes[ie]s\s+(?:is|was|were)\s+rejected)/;
 
+const nearly = /\b(?:marginally|almost|nearly|borderline|approaching|quasi-?|barely|weakly)\s+$/i;
+
 /**
  * Every claim a sentence makes about significance, in order. A negated
  * "significant" ("no statistically significant difference", "did not differ
@@ -24,6 +26,8 @@ export function significanceClaims(masked: string): ClaimHit[] {
   const inside = (at: number) => negative.some((hit) => at >= hit.start && at < hit.end);
   const positive = hits(masked, significant)
     .filter((hit) => !inside(hit.start) && !/non-$/.test(masked.slice(Math.max(0, hit.start - 4), hit.start)))
+    // "Marginally significant" claims neither; near-significance flags it.
+    .filter((hit) => !nearly.test(masked.slice(Math.max(0, hit.start - 14), hit.start)))
     .map((hit) => ({
       start: hit.start,
       end: hit.end,

@@ -22,7 +22,7 @@ const shapes: readonly Shape[] = [
   {
     kind: 'p',
     what: 'p-value',
-    pattern: new RegExp(String.raw`(?<![\w.])[pP](?:[- ]?values?)?\s*(?:(${relation})|\b(?:was|were|is|of)\b)\s*(${number})`),
+    pattern: new RegExp(String.raw`(?<![\w.])[pP](?:[- ]?values?)?\s*(?:(${relation})|\b(?:was|were|is|of)\s+(?:(?:just\s+|well\s+)?(?:above|below|under|over|less than|greater than|smaller than|larger than)\s+)?)\s*(${number})`),
     accept: (match) => withinOne(match[2]),
   },
   {
@@ -46,7 +46,7 @@ const shapes: readonly Shape[] = [
   {
     kind: 'interval',
     what: 'confidence interval',
-    pattern: new RegExp(String.raw`\b(?:CI|[Cc]onfidence [Ii]nterval)\b\s*(?:[:=]\s*|(?:of|from|was|is|ranged from|ranging from|between)\s+)?[\[(]?\s*(${number})\s*%?\s*(?:,|;|to|and|–|—|-)\s*(${number})\s*%?\s*[\])]?`),
+    pattern: new RegExp(String.raw`\b(?:CI|[Cc]onfidence [Ii]nterval)\b\s*(?:[:=]\s*|(?:[a-z]+\s+){0,3}?(?:of|from|was|is|between)\s+)?[\[(]?\s*(${number})\s*%?\s*(?:,|;|to|and|–|—|-)\s*(${number})\s*%?\s*[\])]?`),
     accept: () => true,
   },
 ];
@@ -62,7 +62,7 @@ export const handTypedStatistic: LintRule = {
     for (const shape of shapes) {
       for (const hit of hits(sentence.masked, shape.pattern, true)) {
         const {match} = hit;
-        if (!shape.accept(match) || unitAfter.test(sentence.masked.slice(hit.end))) continue;
+        if (!shape.accept(match) || (shape.kind !== 'interval' && unitAfter.test(sentence.masked.slice(hit.end)))) continue;
         if (taken.some(([start, end]) => hit.start < end && start < hit.end)) continue;
         taken.push([hit.start, hit.end]);
         const typed = shape.kind === 'interval' ? [match[1]!, match[2]!] : [match.at(-1)!];
