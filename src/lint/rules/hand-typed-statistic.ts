@@ -64,14 +64,16 @@ export const handTypedStatistic: LintRule = {
         const {match} = hit;
         if (!shape.accept(match) || (shape.kind !== 'interval' && unitAfter.test(sentence.masked.slice(hit.end)))) continue;
         if (taken.some(([start, end]) => hit.start < end && start < hit.end)) continue;
-        taken.push([hit.start, hit.end]);
+        // A closing bracket belongs to the interval only when it opened one.
+        const end = /[\])]$/.test(match[0]) && !/[\[(]/.test(match[0]) ? hit.end - 1 : hit.end;
+        taken.push([hit.start, end]);
         const typed = shape.kind === 'interval' ? [match[1]!, match[2]!] : [match.at(-1)!];
         const rel = shape.kind === 'interval' ? '=' : (match[shape.kind === 'p' ? 1 : 3] ?? '=');
         const {reference, matched} = suggestReference(shape.kind, typed, rel, sentence, context);
-        const written = sentence.text.slice(hit.start, hit.end);
+        const written = sentence.text.slice(hit.start, end);
         findings.push({
           start: hit.start,
-          end: hit.end,
+          end,
           message: `hand-typed ${shape.what} \`${written}\` does not come from a block result and could drift from the data`,
           suggestion: matched
             ? `Write \`${reference}\` instead: that block's result has this value, and stet fills it in at build time.`
