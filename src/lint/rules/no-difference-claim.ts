@@ -5,7 +5,7 @@ import {affirmedHits, hits} from '../wording-scan.js';
 /** Claims that groups are equal, or that there is nothing there. */
 const equality: readonly RegExp[] = [
   /\bno\s+(?:real\s+|actual\s+|true\s+|meaningful\s+)?(?:difference|effect|association|relationship|correlation|link|change)s?\b(?!\s+(?:was|were)\s+(?:detected|found))/,
-  /\b(?:is|are|was|were|be|stay(?:s|ed)?|remain(?:s|ed)?|seem(?:s|ed)?|appear(?:s|ed)?|look(?:s|ed)?)\s+(?:therefore\s+|thus\s+|essentially\s+|practically\s+|basically\s+|effectively\s+|just\s+|really\s+)?(?:the\s+same|equal|equivalent|identical|interchangeable|indistinguishable|comparable)\b/,
+  /\b(?:is|are|was|were|be|stay(?:s|ed)?|remain(?:s|ed)?|seem(?:s|ed)?|appear(?:s|ed)?|look(?:s|ed)?)\s+(?:therefore\s+|thus\s+|essentially\s+|practically\s+|basically\s+|effectively\s+|just\s+|really\s+)?(?:the\s+same|equal|equivalent|identical|interchangeable|indistinguishable|comparable)\b(?!\s+(?:to\s+(?:the\s+)?(?:reported|stated|printed|shown)\s+precision|(?:to\s+)?within\b|up\s+to\s+rounding))/,
   /\b(?:performs?|performed|behaves?|behaved)\s+(?:equally|the\s+same|identically)\b/,
   /\b(?:did|do|does)\s+not\s+differ\b(?!\s+(?:statistically\s+)?significantly)/,
 ];

@@ -20,3 +20,12 @@ describe('no-difference-claim', async () => {
     expect(check('The depots are the same distance from the site ({{delivery.p}}).')).toEqual([]);
   });
 });
+
+describe('no-difference-claim and rounding', async () => {
+  const {check} = await ruleChecker('no-difference-claim');
+  it('leaves equality stated to a precision or within a margin', () => {
+    expect(check('Mean drift was the same to the reported precision after and before ({{drift.p}}).')).toEqual([]);
+    expect(check('The readings were equal within 0.2 units ({{drift.p}}).')).toEqual([]);
+    expect(check('The readings were equal ({{drift.p}}).')).toEqual(['14:were equal']);
+  });
+});
