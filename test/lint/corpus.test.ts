@@ -1,7 +1,7 @@
 import {describe, expect, it} from 'vitest';
 import {lintSentences} from '../../src/lint/lint-report.js';
 import {sentencesOfText} from '../../src/lint/prose-sentences.js';
-import {corpus, heldOut, type CorpusSentence} from './corpus.js';
+import {corpus, heldOut, thirdBatch, type CorpusSentence} from './corpus.js';
 import {corpusContext} from './corpus-report.js';
 
 describe('lint corpus: precision and recall', async () => {
@@ -10,13 +10,15 @@ describe('lint corpus: precision and recall', async () => {
   it('finds at least 90% of the planted problems and raises at most 10% false findings', () => {
     const tuned = score(corpus);
     const held = score(heldOut);
-    const all = score([...corpus, ...heldOut]);
+    const third = score(thirdBatch);
+    const all = score([...corpus, ...heldOut, ...thirdBatch]);
+    const total = corpus.length + heldOut.length + thirdBatch.length;
     console.log([
-      `lint corpus: ${corpus.length + heldOut.length} sentences, ${all.planted} planted findings; precision ${all.precision.toFixed(3)}, recall ${all.recall.toFixed(3)}`,
-      `  first batch (${corpus.length}): precision ${tuned.precision.toFixed(3)}, recall ${tuned.recall.toFixed(3)}; second batch (${heldOut.length}): precision ${held.precision.toFixed(3)}, recall ${held.recall.toFixed(3)}`,
+      `lint corpus: ${total} sentences, ${all.planted} planted findings; precision ${all.precision.toFixed(3)}, recall ${all.recall.toFixed(3)}`,
+      `  first batch (${corpus.length}): precision ${tuned.precision.toFixed(3)}, recall ${tuned.recall.toFixed(3)}; second batch (${heldOut.length}): precision ${held.precision.toFixed(3)}, recall ${held.recall.toFixed(3)}; third batch (${thirdBatch.length}): precision ${third.precision.toFixed(3)}, recall ${third.recall.toFixed(3)}`,
       ...all.misses.map((miss) => `  ${miss}`),
     ].join('\n'));
-    expect(corpus.length + heldOut.length).toBeGreaterThanOrEqual(60);
+    expect(total).toBeGreaterThanOrEqual(60);
     expect(all.recall).toBeGreaterThanOrEqual(0.9);
     expect(all.precision).toBeGreaterThanOrEqual(0.9);
   });

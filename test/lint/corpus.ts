@@ -118,8 +118,9 @@ export const corpus: readonly CorpusSentence[] = [
 
 /**
  * A second batch, written after the rules were tuned on the first and
- * measured before any rule was changed for it (its first score is quoted in
- * the lint's report); later rule changes are checked against both.
+ * measured before any rule was changed for it: precision 1.000, recall 0.571
+ * (12 of 21) on that first run. Rules were then widened; all batches are
+ * checked together from then on.
  */
 export const heldOut: readonly CorpusSentence[] = [
   {text: 'Depot South was slower on average (P = .001).', expect: ['hand-typed-statistic']},
@@ -152,4 +153,41 @@ export const heldOut: readonly CorpusSentence[] = [
   {text: 'The readings after servicing were higher than before, by {{drift.estimate.value}} units.', expect: []},
   {text: 'The delay at South is larger than the smallest delay that matters to the pump crews ({{delivery.estimate}}).', expect: []},
   {text: 'We report the interval rather than calling the result significant or not.', expect: []},
+];
+
+/**
+ * A third batch, measured once before any rule changed for it, like the
+ * second: precision 1.000, recall 0.700 (14 of 20) on that first run.
+ */
+export const thirdBatch: readonly CorpusSentence[] = [
+  {text: 'The calibration offset grew by 0.4 units per month (SE 0.1, p = .002).', expect: ['hand-typed-statistic']},
+  {text: 'Quarrybank’s slump was 4 mm higher, 95% confidence interval −6 to 13 mm.', expect: ['hand-typed-statistic']},
+  {text: 'The effect on delivery time was large (Cohen’s d = 2.3).', expect: ['hand-typed-statistic']},
+  {text: 'Cube strength fell with the water–cement ratio, F(1, 34) = 17.8, p < .001.', expect: ['hand-typed-statistic', 'hand-typed-statistic']},
+  {text: 'Only 3 of the 40 sensors were replaced during the study.', expect: []},
+  {text: 'The threshold of 0.05 was set in the test plan.', expect: []},
+  {text: 'All 24 cylinders were crushed at 28 days ± 4 hours.', expect: []},
+  {text: 'Because the test was not significant ({{drift.p}}), we conclude the servicing makes no difference.', expect: ['no-difference-claim']},
+  {text: 'The 7-day strengths of the two suppliers were practically identical ({{early}}).', expect: ['no-difference-claim']},
+  {text: 'Our result supports the null hypothesis of no drift ({{drift.p}}).', expect: ['accept-null']},
+  {text: 'The data prove that servicing leaves the readings unchanged.', expect: ['accept-null']},
+  {text: 'There is a 97% chance that South really is slower ({{delivery.p}}).', expect: ['p-value-meaning']},
+  {text: 'The small p-value means the delay is unlikely to be a random fluke.', expect: ['p-value-meaning']},
+  {text: 'The drift result was significant at the 10% level but not at 5%.', expect: ['near-significance']},
+  {text: 'The early-age difference was nearly significant ({{early.p}}).', expect: ['near-significance']},
+  {text: 'The South delay was hugely significant ({{delivery.p}}).', expect: ['significance-as-size']},
+  {text: 'We computed the achieved power of the drift test afterwards.', expect: ['observed-power']},
+  {text: 'The weaker Quarrybank concrete is a significant finding and must therefore matter to the engineer.', expect: ['significance-as-importance']},
+  {text: 'The depot difference turned out to be nonsignificant ({{delivery.p}}).', expect: ['contradicts-decision']},
+  {text: 'Supplier mattered significantly for early strength ({{early}}).', expect: ['contradicts-decision']},
+  {text: 'After servicing the sensors read lower than before ({{drift.estimate}}).', expect: ['contradicts-direction']},
+  {text: 'North’s delivery times exceeded South’s, being higher than South by {{delivery.estimate.value}} minutes.', expect: ['contradicts-direction']},
+  {text: 'South’s deliveries took longer than North’s by {{delivery.estimate.value}} minutes ({{delivery.p}}).', expect: []},
+  {text: 'Since the early difference was not significant ({{early.p}}), we make no claim about 7-day strength.', expect: []},
+  {text: 'The null hypothesis was rejected for the depots ({{delivery.p}}) but not for the sensors ({{drift.p}}).', expect: []},
+  {text: 'We cannot tell from these data whether the suppliers differ at 7 days ({{early.estimate}}).', expect: []},
+  {text: 'Significance alone does not make the South delay important; its size ({{delivery.estimate}}) does.', expect: []},
+  {text: 'The sensitivity statement gives the smallest drift the test could detect ({{drift.sentence}}).', expect: []},
+  {text: 'Northfield outperformed Quarrybank at 28 days ({{strength.estimate}}).', expect: []},
+  {text: 'The sample of twelve slabs is small, so the interval is wide.', expect: []},
 ];

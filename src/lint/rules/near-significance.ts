@@ -1,7 +1,7 @@
 import type {LintRule} from '../types.js';
 import {hits} from '../wording-scan.js';
 
-const pattern = /\b(?:(?:marginally|almost|nearly|borderline|quasi-?|weakly|barely|approaching)\s+(?:statistically\s+)?significant|marginal(?:ly)?\s+(?:statistical\s+)?significance|borderline\s+significance|(?:approach(?:es|ed|ing)?|nearly reach(?:es|ed|ing)?|verge of|close to|edge of)\s+(?:statistical\s+)?significance|trend(?:s|ed|ing)?\s+(?:toward|towards|to)\s+(?:statistical\s+)?significance|tendency\s+(?:toward|towards)\s+(?:statistical\s+)?significance|(?:just|narrowly|barely)\s+(?:missed|failed to reach|fell short of)\s+(?:statistical\s+)?significance)\b/;
+const pattern = /\b(?:(?:marginally|almost|nearly|borderline|quasi-?|weakly|barely|approaching)\s+(?:statistically\s+)?significant|marginal(?:ly)?\s+(?:statistical\s+)?significance|borderline\s+significance|(?:approach(?:es|ed|ing)?|nearly reach(?:es|ed|ing)?|verge of|close to|edge of)\s+(?:statistical\s+)?significance|trend(?:s|ed|ing)?\s+(?:toward|towards|to)\s+(?:statistical\s+)?significance|tendency\s+(?:toward|towards)\s+(?:statistical\s+)?significance|significant\s+at\s+(?:the\s+)?(?:10|ten)\s*(?:%|per\s?cent)\s+level|(?:just|narrowly|barely)\s+(?:missed|failed to reach|fell short of)\s+(?:statistical\s+)?significance)\b/;
 
 export const nearSignificance: LintRule = {
   id: 'near-significance',

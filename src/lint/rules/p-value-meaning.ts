@@ -12,6 +12,8 @@ const patterns: readonly RegExp[] = [
   /\b(?:probability|chance|likelihood|odds)\s+(?:that|of)\s+(?:the\s+|this\s+|our\s+)?(?:result|finding|difference|effect|association)s?\s+(?:is|was|are|were|being)\s+(?:real|true|a fluke|random|genuine)\b/,
   /\b\d+(?:\.\d+)?\s*%\s+(?:probability|chance|likelihood)\s+(?:of\s+being|that\s+(?:it|this|the\s+\w+)\s+(?:is|was))\s+(?:real|true|genuine|a fluke)\b/,
   /\b(?:probability|chance|likelihood|odds)\s+(?:that|of)\s+(?:the\s+|this\s+|our\s+)?[\w\s-]{0,30}?\b(?:arose|arises|arise|occurred|happened|came about|appeared)\s+(?:by|through|from)\s+(?:random\s+|pure\s+|mere\s+)?chance\b/,
+  /\b\d+(?:\.\d+)?\s*%\s+(?:sure|certain|probability|chance)\s+that\s+[^.;]{0,40}?\b(?:real(?:ly)?|truly|true|genuine(?:ly)?|exists?)\b/,
+  /\b(?:be|is|was|are|were|being)\s+(?:just\s+|only\s+|merely\s+|simply\s+)?(?:a\s+)?(?:random\s+|chance\s+|statistical\s+)?flukes?\b/,
   /\b(?:is|was|are|were|be|being)\s+(?:just\s+|only\s+|simply\s+|entirely\s+)?(?:due to|caused by|down to)\s+(?:random\s+|pure\s+|mere\s+)?chance\b/,
   /\b\d+(?:\.\d+)?\s*%\s+(?:sure|certain|probability|chance|likely)\s+that\s+(?:the\s+|this\s+)?(?:\w+\s+)?(?:effect|difference|result|null|hypothesis|association)\b(?:\s+(?:is|was)\s+(?:real|true|genuine|due to (?:random\s+)?chance))?/,
 ];
