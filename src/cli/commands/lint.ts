@@ -29,6 +29,7 @@ export const lintCommand: Command = {
       io.stderr('the report has errors, so it could not be linted.\n');
       return 1;
     }
+    for (const message of others) io.stderr(`${formatMessage(message, paint)}\n`);
     if (values.format === 'json') io.stdout(`${JSON.stringify(findings.map(toJson), null, 2)}\n`);
     else {
       for (const message of findings) io.stdout(`${formatMessage(message, paint)}\n`);
