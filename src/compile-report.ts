@@ -52,9 +52,8 @@ export interface CompiledReport {
  * Compile a report in memory:
  *
  *   read → parse (remark) → remarkStet (resolve data, compute, interpret)
- *        → render Markdown, HTML, JSON, charts
- *
  *        → lint the author's prose against the results (errors fail it)
+ *        → render Markdown, HTML, JSON, charts
  *
  * Nothing is written; `buildReport` writes, `stet check` compares.
  */

@@ -12,7 +12,11 @@ const turn = /;|\b(?:but|whereas|while|although|though|however|yet|unlike)\b/gi;
  * block's decision and are left out.
  */
 export function blocksAt(sentence: ProseSentence, at: number, context: LintContext): InterpretedBlock[] {
-  const bounds = [0, ...[...sentence.masked.matchAll(turn)].map((match) => match.index), sentence.masked.length];
+  const turns = [...sentence.masked.matchAll(turn)].map((match) => match.index).filter((index) => index > 0);
+  // "Although A, B": the opening clause ends at its comma.
+  const opening = /^\s*(?:although|though|while|whereas|unlike)\b[^,]*,/i.exec(sentence.masked);
+  if (opening) turns.push(opening[0].length);
+  const bounds = [0, ...turns.sort((a, b) => a - b), sentence.masked.length];
   let from = 0;
   let to = sentence.masked.length;
   for (let i = 0; i + 1 < bounds.length; i++) {
@@ -23,7 +27,11 @@ export function blocksAt(sentence: ProseSentence, at: number, context: LintConte
   const near = cited.filter((reference) => reference.start >= from && reference.end <= to);
   const implicit = sentence.blockIds.filter((id) => !referenced.has(id));
   const anywhere = new Set([...cited.map((reference) => reference.id), ...implicit]);
-  const distinct = near.length > 0 ? [...new Set(near.map((reference) => reference.id))] : anywhere.size === 1 ? [...anywhere] : [];
+  // Without a reference in its own part, a phrase is about the sentence's one
+  // block only when the sentence does not turn ("A was not significant, but B …")
+  // or cites nothing (a sentence stet wrote for that block).
+  const single = anywhere.size === 1 && (bounds.length === 2 || sentence.references.length === 0);
+  const distinct = near.length > 0 ? [...new Set(near.map((reference) => reference.id))] : single ? [...anywhere] : [];
   return distinct
     .map((id) => context.blocks.get(id))
     .filter((block): block is InterpretedBlock => block?.result.decision !== undefined);

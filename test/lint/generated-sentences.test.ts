@@ -29,10 +29,11 @@ describe('stet\'s own sentences pass its lint', async () => {
       const findings = lintSentences(sentencesOfText(block.result.sentence, [id]), context, wordingRules);
       expect(findings.map((finding) => `${id}: ${finding.rule}: ${finding.message}`)).toEqual([]);
     }
-    // The same check does catch a misreading planted in a generated sentence.
-    const [id, block] = [...data.blocks].find(([, b]) => b.result.decision === 'fail-to-reject' && /does not show that/.test(b.result.sentence))!;
-    const planted = block.result.sentence.replace(/This does not show that/, 'This shows that');
-    expect(lintSentences(sentencesOfText(planted, [id]), context, wordingRules).map((finding) => finding.rule)).toContain('no-difference-claim');
+    // The same check does catch misreadings and contradictions planted in sentences of this shape.
+    const planted = (text: string, id: string) => lintSentences(sentencesOfText(text, [id]), context, wordingRules).map((finding) => finding.rule);
+    expect(planted('Welch’s t test detected no statistically significant difference (p = .416). The population means are equal.', 'supplier-7d')).toEqual(['no-difference-claim']);
+    expect(planted('Welch’s t test found a statistically significant difference in mean slump (p = .431).', 'slump')).toEqual(['contradicts-decision']);
+    expect(planted('Mean compressive strength was 2.8 MPa higher in Quarrybank than in Northfield.', 'supplier-28d')).toEqual(['contradicts-direction']);
   });
 
   it('no rule fires on the prose of the built Markdown', () => {

@@ -28,3 +28,11 @@ describe('contradicts-decision', async () => {
     expect(check('The slabs were compared ({{early.posthoc}}) and were significantly different.')).toEqual([]);
   });
 });
+
+describe('contradicts-decision across a turn', async () => {
+  const {check} = await ruleChecker('contradicts-decision');
+  it('does not lend one part\'s reference to another part', () => {
+    expect(check('Although the early test was not significant, the 28-day difference was significant ({{strength.p}}).')).toEqual([]);
+    expect(check('Although the 28-day difference was significant ({{strength.p}}), the early test was not significant.')).toEqual([]);
+  });
+});
