@@ -1,13 +1,14 @@
 import type {InterpretedBlock} from '../interpret/result-record.js';
-import type {LintContext, ProseSentence} from './types.js';
+import type {LintContext, ProseReference, ProseSentence} from './types.js';
 
 /** Where a sentence turns from one finding to another. */
 const turn = /;|\b(?:but|whereas|while|although|though|however|yet|unlike)\b/gi;
 
 /**
- * The tested blocks a phrase at `at` speaks about: those cited in its part of
- * the sentence (parts split where the argument turns, "A was significant but
- * B was not"), else the one block the whole sentence is about. References to
+ * The tested block a phrase at `at` speaks about: the nearest one cited in its
+ * part of the sentence (parts split where the argument turns, "A was
+ * significant but B was not"), else the one block an unbroken sentence is
+ * about. References to
  * one comparison of a block (`posthoc`, `coefficients`) are not about the
  * block's decision and are left out.
  */
@@ -31,8 +32,14 @@ export function blocksAt(sentence: ProseSentence, at: number, context: LintConte
   // block only when the sentence does not turn ("A was not significant, but B …")
   // or cites nothing (a sentence stet wrote for that block).
   const single = anywhere.size === 1 && (bounds.length === 2 || sentence.references.length === 0);
-  const distinct = near.length > 0 ? [...new Set(near.map((reference) => reference.id))] : single ? [...anywhere] : [];
+  const distinct = near.length > 0 ? [nearest(near, at).id] : single ? [...anywhere] : [];
   return distinct
     .map((id) => context.blocks.get(id))
     .filter((block): block is InterpretedBlock => block?.result.decision !== undefined);
+}
+
+/** The reference closest to a phrase: "A ({{a.p}}) was significant and B ({{b.p}}) was not". */
+function nearest(references: readonly ProseReference[], at: number): ProseReference {
+  const distance = (reference: ProseReference) => (at < reference.start ? reference.start - at : Math.max(0, at - reference.end));
+  return references.reduce((best, reference) => (distance(reference) < distance(best) ? reference : best));
 }

@@ -36,3 +36,11 @@ describe('contradicts-decision across a turn', async () => {
     expect(check('Although the 28-day difference was significant ({{strength.p}}), the early test was not significant.')).toEqual([]);
   });
 });
+
+describe('contradicts-decision with two blocks in one part', async () => {
+  const {check} = await ruleChecker('contradicts-decision');
+  it('reads a claim as about the nearest reference', () => {
+    expect(check('The 28-day test ({{strength.p}}) was significant, and the 7-day test ({{early.p}}) was not.')).toEqual([]);
+    expect(check('The 7-day test ({{early.p}}) was significant, and the 28-day test ({{strength.p}}) was too.')).toEqual(['34:significant']);
+  });
+});
