@@ -11,6 +11,7 @@ import {reportError} from './document/report-error.js';
 import {readPlanHistory, type PlanHistory} from './lock/plan-history.js';
 import type {BlockCache} from './cache/block-cache.js';
 import {familyChartPath} from './charts/family-charts.js';
+import {lintReport} from './lint/lint-report.js';
 import remarkStet, {type StetData} from './remark-stet.js';
 import {appendixFiles} from './render/appendix-files.js';
 import {familyFigureName} from './render/family-nodes.js';
@@ -66,6 +67,7 @@ export interface CompiledReport {
  * Compile a report in memory:
  *
  *   read → parse (remark) → remarkStet (resolve data, compute, interpret)
+ *        → lint the author's prose against the results (errors fail it)
  *        → render Markdown, HTML, JSON, charts
  *
  * Nothing is written; `buildReport` writes, `stet check` compares.
@@ -85,7 +87,11 @@ export async function compileReport(reportPath: string, options: CompileOptions 
     disclose: history?.disclose,
     cache: options.cache,
   });
-  const tree = (await parser.run(parser.parse(file), file)) as Root;
+  const parsed = parser.parse(file);
+  // The lint reads the author's prose as written, before blocks and references are replaced.
+  const source = structuredClone(parsed);
+  const tree = (await parser.run(parsed, file)) as Root;
+  if (file.data.stet && !file.messages.some((message) => message.fatal)) lintReport(source, file, file.data.stet);
   const messages = [...file.messages].sort((a, b) => (a.line ?? 0) - (b.line ?? 0) || (a.column ?? 0) - (b.column ?? 0));
   const data = file.data.stet;
   const failed = {ok: false, messages, files: new Map<string, string>(), outDir, reportPath: absolute, name, data, history};

@@ -12,3 +12,6 @@ export type {BlockResult} from './compute/block-result.js';
 export {UserError} from './user-error.js';
 export {compileReport, outputFormats} from './compile-report.js';
 export type {CompileOptions, CompiledReport, OutputFormat} from './compile-report.js';
+export {lintReport, lintSource} from './lint/lint-report.js';
+export {lintRules} from './lint/rules/index.js';
+export type {LintRule} from './lint/types.js';

@@ -3,6 +3,7 @@ import {defaultDatasetOptions, normalizeDelimiter, type DatasetOptions} from '..
 import {mappingEntries, parseYamlAt} from '../document/yaml-at.js';
 import {styleNames, type StyleName} from '../interpret/number-style.js';
 import {UserError, type Place} from '../user-error.js';
+import {parseLintSettings} from './parse-lint-settings.js';
 import {didYouMean} from './suggest.js';
 import {levelRules, readChoice, readNumber, readString, readStringList, type ValueContext} from './read-value.js';
 
@@ -26,6 +27,8 @@ export interface DocumentSettings {
   /** Number conventions (`number-style.ts`). */
   readonly style: StyleName;
   readonly datasets: ReadonlyMap<string, DatasetDeclaration>;
+  /** Lint rules switched off (`lint: {off: [...]}`). */
+  readonly lintOff: ReadonlySet<string>;
   /** Front matter without the `stet` key, for the Markdown output. */
   readonly passthrough: Readonly<Record<string, unknown>>;
 }
@@ -37,10 +40,11 @@ export const defaultSettings: DocumentSettings = {
   adjust: 'none',
   style: 'science',
   datasets: new Map(),
+  lintOff: new Set(),
   passthrough: {},
 };
 
-const settingKeys = ['alpha', 'confidence', 'adjust', 'style', 'datasets'];
+const settingKeys = ['alpha', 'confidence', 'adjust', 'style', 'datasets', 'lint'];
 const datasetKeys = ['file', 'delimiter', 'decimal', 'missing', 'types', 'units', 'labels'];
 
 /** @param origin Report position of the first line inside the `---` fences. */
@@ -62,6 +66,7 @@ export function parseSettings(text: string, origin: Place): DocumentSettings {
     else if (key === 'adjust') settings = {...settings, adjust: readChoice(context, adjustMethods)};
     else if (key === 'style') settings = {...settings, style: readStyle(context)};
     else if (key === 'datasets') settings = {...settings, datasets: parseDatasets(context)};
+    else if (key === 'lint') settings = {...settings, lintOff: parseLintSettings(context)};
     else {
       throw new UserError(`unknown setting \`${key}\` under \`stet\``, {
         ruleId: 'unknown-setting',

@@ -17,7 +17,8 @@ export const checkCommand: Command = {
     const report = oneReport('check', positionals);
     const result = await checkReport(report, {out: values.out, allowOutside: values['allow-outside']});
     const shown = (subject: string) => (path.isAbsolute(subject) ? path.relative(process.cwd(), subject) : subject);
-    if (!printMessages(result.messages, io, paint)) {
+    // Only errors: warnings (lint, assumptions) belong to `build` and `lint`; check answers one question.
+    if (!printMessages(result.messages.filter((message) => message.fatal), io, paint)) {
       io.stderr('the report does not build, so its output cannot be current.\n');
       return 1;
     }

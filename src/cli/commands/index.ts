@@ -1,6 +1,7 @@
 import type {Command} from '../command.js';
 import {buildCommand} from './build.js';
 import {checkCommand} from './check.js';
+import {lintCommand} from './lint.js';
 import {lockCommand} from './lock.js';
 import {watchCommand} from './watch.js';
 
@@ -8,6 +9,7 @@ import {watchCommand} from './watch.js';
 export const commands: ReadonlyMap<string, Command> = new Map([
   ['build', buildCommand],
   ['check', checkCommand],
+  ['lint', lintCommand],
   ['lock', lockCommand],
   ['watch', watchCommand],
 ]);

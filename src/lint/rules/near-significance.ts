@@ -1,0 +1,18 @@
+import type {LintRule} from '../types.js';
+import {hits} from '../wording-scan.js';
+
+const pattern = /\b(?:(?:marginally|almost|nearly|borderline|quasi-?|weakly|barely|approaching)\s+(?:statistically\s+)?significant|marginal(?:ly)?\s+(?:statistical\s+)?significance|borderline\s+significance|(?:approach(?:es|ed|ing)?|nearly reach(?:es|ed|ing)?|verge of|close to|edge of)\s+(?:statistical\s+)?significance|trend(?:s|ed|ing)?\s+(?:toward|towards|to)\s+(?:statistical\s+)?significance|tendency\s+(?:toward|towards)\s+(?:statistical\s+)?significance|significant\s+at\s+(?:the\s+)?(?:10|ten)\s*(?:%|per\s?cent)\s+level|(?:just|narrowly|barely)\s+(?:missed|failed to reach|fell short of)\s+(?:statistical\s+)?significance)\b/;
+
+export const nearSignificance: LintRule = {
+  id: 'near-significance',
+  severity: 'warning',
+  explanation: 'a p-value above alpha is not “almost” significant; the decision was fixed before the data',
+  suggestion: 'Report the result as not statistically significant at the declared alpha, with `{{ID.p}}` and the interval of the estimate.',
+  checkSentence(sentence) {
+    return hits(sentence.masked, pattern).map((hit) => ({
+      start: hit.start,
+      end: hit.end,
+      message: `“${sentence.text.slice(hit.start, hit.end)}” treats a non-significant result as nearly significant`,
+    }));
+  },
+};

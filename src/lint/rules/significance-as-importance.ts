@@ -1,0 +1,30 @@
+import type {LintRule, ProseSentence} from '../types.js';
+import {isNegated, hits} from '../wording-scan.js';
+
+const pattern = /\b(?:statistically\s+)?significant(?:ly)?\b[^.;]{0,50}?\b(?:so|therefore|thus|hence|which means|meaning|proving|showing|so that|and is|and so)\b[^.;]{0,50}?\b(?:it|this|that|they|the \w+)?\s*(?:matters?|important|meaningful|relevant|substantial|consequential|noteworthy|worth acting on|practically significant|clinically significant|large|major)\b/;
+/** "Because it is significant, it is large enough …": the same inference, cause first. */
+const because = /\b(?:because|since|as)\b[^.;]{0,40}?\b(?:statistically\s+)?significant\b[^.;,]{0,10},\s*[^.;]{0,30}?\b(?:matters?|important|meaningful|relevant|substantial|consequential|large enough|big enough|large|major)\b/;
+/** Words and references that put the size of the effect beside the claim. */
+const sizeWords = /\b(?:effect size|Hedges|Cohen|interval|CI|smallest effect)\b|\b(?:by|of)\s+[−-]?\d/;
+
+export const significanceAsImportance: LintRule = {
+  id: 'significance-as-importance',
+  severity: 'warning',
+  explanation: 'statistical significance says the data are unlikely under the null, not that the effect is large enough to matter',
+  suggestion: 'Say why the size matters: cite `{{ID.estimate}}` (with its interval) against the smallest effect of interest.',
+  checkSentence(sentence) {
+    if (mentionsSize(sentence)) return [];
+    return [...hits(sentence.masked, pattern), ...hits(sentence.masked, because)]
+      .filter((hit) => !isNegated(sentence.masked, hit.start, 4) && !/\bnon-$|\bin$/.test(sentence.masked.slice(Math.max(0, hit.start - 4), hit.start)))
+      .map((hit) => ({
+        start: hit.start,
+        end: hit.end,
+        message: `“${sentence.text.slice(hit.start, hit.end)}” takes statistical significance as proof that the effect matters`,
+      }));
+  },
+};
+
+function mentionsSize(sentence: ProseSentence): boolean {
+  const sized = sentence.references.some((reference) => reference.path.length === 0 || ['estimate', 'effect'].includes(reference.path[0]!));
+  return sized || sizeWords.test(sentence.masked);
+}

@@ -1,0 +1,56 @@
+/**
+ * Small readers of English the rules share: where a clause starts, whether
+ * a phrase is negated, which matches of a pattern a sentence holds. They
+ * work on a sentence's masked text, so offsets are offsets into `text`.
+ */
+
+/** Where a clause may start: punctuation or a conjunction that turns the argument. */
+const clauseBoundary = /[;:,()—–]|\b(?:but|so|therefore|thus|hence|whereas|while|although|though|because|and|yet)\b/gi;
+
+/** Words that negate what follows them in the same clause. */
+const negator = /\b(?:not|never|no|nor|neither|cannot|without|rather than|instead of|avoid|avoids|avoided|refrain from)\b|n['’]t\b/i;
+
+/** Offset where the clause holding `index` starts. */
+export function clauseStart(text: string, index: number): number {
+  let start = 0;
+  for (const match of text.slice(0, index).matchAll(clauseBoundary)) start = match.index + match[0].length;
+  return start;
+}
+
+/** Offset where the clause holding `index` ends. */
+export function clauseEnd(text: string, index: number): number {
+  const rest = text.slice(index);
+  const match = new RegExp(clauseBoundary.source, 'i').exec(rest);
+  return match ? index + match.index : text.length;
+}
+
+/**
+ * Whether the phrase at `index` is negated: a negator among the last `words`
+ * words of its clause before it ("does not show that the means are equal").
+ */
+export function isNegated(text: string, index: number, words = 8): boolean {
+  if (words <= 0) return false;
+  const before = text.slice(clauseStart(text, index), index).trim().split(/\s+/).slice(-words).join(' ');
+  return negator.test(before);
+}
+
+export interface Hit {
+  readonly start: number;
+  readonly end: number;
+  readonly match: RegExpMatchArray;
+}
+
+/** Every match of `pattern` (made global and case-insensitive) in `text`. */
+export function hits(text: string, pattern: RegExp, caseSensitive = false): Hit[] {
+  const flags = `g${caseSensitive ? '' : 'i'}${pattern.flags.includes('u') ? 'u' : ''}`;
+  return [...text.matchAll(new RegExp(pattern.source, flags))].map((match) => ({
+    start: match.index ?? 0,
+    end: (match.index ?? 0) + match[0].length,
+    match,
+  }));
+}
+
+/** Matches of `pattern` that are not negated in their clause. */
+export function affirmedHits(text: string, pattern: RegExp, words = 8): Hit[] {
+  return hits(text, pattern).filter((hit) => !isNegated(text, hit.start, words));
+}

@@ -1,0 +1,17 @@
+import {describe, expect, it} from 'vitest';
+import {ruleChecker} from './rule-check.js';
+
+describe('observed-power', async () => {
+  const {check} = await ruleChecker('observed-power');
+
+  it('flags power computed after the fact', () => {
+    expect(check('The observed power was 6%.')).toEqual(['5:observed power']);
+    expect(check('A post-hoc power analysis followed.')).toEqual(['3:post-hoc power']);
+    expect(check('Post hoc power was low.')).toEqual(['1:Post hoc power']);
+  });
+
+  it('does not flag a refusal or a declared sensitivity', () => {
+    expect(check('We do not report observed power.')).toEqual([]);
+    expect(check('The test had {{early.sensitivity.power_at_smallest_effect}} power to detect 2 MPa.')).toEqual([]);
+  });
+});
