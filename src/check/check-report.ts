@@ -1,7 +1,6 @@
 import {readFile} from 'node:fs/promises';
 import path from 'node:path';
 import type {VFileMessage} from 'vfile-message';
-import {compileReport} from '../compile-report.js';
 import {countSpecifications, readLedger} from '../ledger/ledger.js';
 import {readLock} from '../lock/lock-file.js';
 import {sha256} from '../spec/spec-fingerprint.js';
@@ -59,6 +58,8 @@ export async function checkReport(reportPath: string, options: CheckOptions = {}
   }
 
   // 2. Compile in memory as the last build did, and compare.
+  // Loaded only now: the fast path above never needs the compiler.
+  const {compileReport} = await import('../compile-report.js');
   const compiled = await compileReport(absolute, {
     out: outDir,
     allowOutside: options.allowOutside,

@@ -20,9 +20,12 @@ export interface Command {
   /** One line for `stet --help`, e.g. `build REPORT.md [--out DIR]`. */
   readonly usage: string;
   readonly summary: string;
-  /** Resolves to the exit code: 0 success, 1 the report is wrong (or stale), 2 usage. */
-  readonly run: (context: CommandContext) => Promise<number>;
+  /** Loads the command's module (`cli/commands/NAME.ts`) and gives its `run`. */
+  readonly load: () => Promise<CommandRun>;
 }
+
+/** Resolves to the exit code: 0 success, 1 the report is wrong (or stale), 2 usage. */
+export type CommandRun = (context: CommandContext) => Promise<number>;
 
 /** A usage error: printed with a pointer to --help, exit code 2. */
 export class UsageError extends Error {}

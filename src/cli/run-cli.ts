@@ -18,7 +18,7 @@ export async function runCli(argv: readonly string[], io: CliIo): Promise<number
   if (!command) return usage(io, `unknown command \`${first}\``);
   if (args.includes('--help') || args.includes('-h')) return io.stdout(helpText()), 0;
   try {
-    return await command.run({args, io, paint});
+    return await (await command.load())({args, io, paint});
   } catch (error) {
     // node:util parseArgs reports unknown options with a `code` of ERR_PARSE_ARGS_*.
     if (error instanceof UsageError || String((error as {code?: unknown}).code).startsWith('ERR_PARSE_ARGS')) {

@@ -17,12 +17,16 @@ export interface HtmlBodyOptions {
 
 /**
  * GitHub-style sanitising, plus stet's own `stet-*` classes (captions,
- * tables). Ids are still prefixed (`user-content-`) so an author's HTML
+ * tables) and block markers. Ids are still prefixed (`user-content-`) so an author's HTML
  * cannot clobber the page's; stet sets its own ids after sanitising.
  */
 const schema: SanitizeSchema = {
   ...defaultSchema,
-  attributes: {...defaultSchema.attributes, '*': [...(defaultSchema.attributes?.['*'] ?? []), ['className', /^stet-/]]},
+  attributes: {
+    ...defaultSchema.attributes,
+    // `data-stet-block` marks a block's sentence for the live-reload page of `stet watch --serve`.
+    '*': [...(defaultSchema.attributes?.['*'] ?? []), ['className', /^stet-/], 'dataStetBlock'],
+  },
 };
 
 /**

@@ -48,7 +48,7 @@ describe('the plan lock', () => {
   it('labels a changed block and an added block exploratory, the others confirmatory', async () => {
     const report = await smallWorkspace();
     await lockNow(report);
-    await edit(report, 'mu: 10', 'mu: 10\nalpha: 0.10');
+    await edit(report, 'mu: 10', 'mu: 10\nalpha: 0.10 # a screening check, looser on purpose');
     await edit(report, 'Rig A against', '```stet\nid: spread\ntest: levene\ndata: loads\ny: load_kn\nby: rig\nlevels: [A, B]\nchart: none\n```\n\nRig A against');
     const {results} = await build(report);
     expect(plans(results)).toEqual({rigs: 'confirmatory', nominal: 'exploratory', spread: 'exploratory'});

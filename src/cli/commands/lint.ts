@@ -2,42 +2,38 @@ import {parseArgs} from 'node:util';
 import type {VFileMessage} from 'vfile-message';
 import {compileReport} from '../../compile-report.js';
 import {lintSource} from '../../lint/lint-report.js';
-import {UsageError, type Command} from '../command.js';
+import {UsageError, type CommandContext} from '../command.js';
 import {formatMessage} from '../format-message.js';
 import {oneReport} from '../one-report.js';
 import {printMessages} from '../print-messages.js';
 
-export const lintCommand: Command = {
-  usage: 'lint REPORT.md [--format text|json] [--allow-outside]',
-  summary: 'check the prose for hand-typed numbers, misread results and contradictions',
-  async run({args, io, paint}) {
-    const {values, positionals} = parseArgs({
-      args: [...args],
-      allowPositionals: true,
-      options: {format: {type: 'string', default: 'text'}, 'allow-outside': {type: 'boolean'}},
-    });
-    if (values.format !== 'text' && values.format !== 'json') {
-      throw new UsageError(`unknown --format \`${values.format}\` (formats: text, json)`);
-    }
-    const report = oneReport('lint', positionals);
-    // Compiled in memory for the results the rules compare against; nothing is written.
-    const compiled = await compileReport(report, {allowOutside: values['allow-outside'], formats: new Set()});
-    const findings = compiled.messages.filter((message) => message.source === lintSource);
-    const others = compiled.messages.filter((message) => message.source !== lintSource);
-    if (others.some((message) => message.fatal)) {
-      printMessages(others, io, paint);
-      io.stderr('the report has errors, so it could not be linted.\n');
-      return 1;
-    }
-    for (const message of others) io.stderr(`${formatMessage(message, paint)}\n`);
-    if (values.format === 'json') io.stdout(`${JSON.stringify(findings.map(toJson), null, 2)}\n`);
-    else {
-      for (const message of findings) io.stdout(`${formatMessage(message, paint)}\n`);
-      io.stdout(`${summary(findings)}\n`);
-    }
-    return findings.some((message) => message.fatal) ? 1 : 0;
-  },
-};
+export async function run({args, io, paint}: CommandContext): Promise<number> {
+  const {values, positionals} = parseArgs({
+    args: [...args],
+    allowPositionals: true,
+    options: {format: {type: 'string', default: 'text'}, 'allow-outside': {type: 'boolean'}},
+  });
+  if (values.format !== 'text' && values.format !== 'json') {
+    throw new UsageError(`unknown --format \`${values.format}\` (formats: text, json)`);
+  }
+  const report = oneReport('lint', positionals);
+  // Compiled in memory for the results the rules compare against; nothing is written.
+  const compiled = await compileReport(report, {allowOutside: values['allow-outside'], formats: new Set()});
+  const findings = compiled.messages.filter((message) => message.source === lintSource);
+  const others = compiled.messages.filter((message) => message.source !== lintSource);
+  if (others.some((message) => message.fatal)) {
+    printMessages(others, io, paint);
+    io.stderr('the report has errors, so it could not be linted.\n');
+    return 1;
+  }
+  for (const message of others) io.stderr(`${formatMessage(message, paint)}\n`);
+  if (values.format === 'json') io.stdout(`${JSON.stringify(findings.map(toJson), null, 2)}\n`);
+  else {
+    for (const message of findings) io.stdout(`${formatMessage(message, paint)}\n`);
+    io.stdout(`${summary(findings)}\n`);
+  }
+  return findings.some((message) => message.fatal) ? 1 : 0;
+}
 
 function toJson(message: VFileMessage) {
   return {

@@ -4,55 +4,51 @@ import {isUserError} from '../../user-error.js';
 import {defaultPort, serveOut, type OutServer} from '../../serve/serve-out.js';
 import {rebuildSummary} from '../../watch/rebuild-summary.js';
 import {watchReport, type BuildOutcome} from '../../watch/watch-report.js';
-import {UsageError, type CliIo, type Command} from '../command.js';
+import {UsageError, type CliIo, type CommandContext} from '../command.js';
 import {formatMessage, formatUserError, noPaint, type Paint} from '../format-message.js';
 import {oneReport} from '../one-report.js';
 import {parseFormats} from './build.js';
 import {printMessages} from '../print-messages.js';
 
-export const watchCommand: Command = {
-  usage: 'watch REPORT.md [--out DIR] [--serve [PORT]] [--to FORMATS] [--template FILE] [--allow-html] [--allow-outside]',
-  summary: 'build, then rebuild whenever the report, its data or the templates change',
-  async run({args, io, paint}) {
-    const {rest, serve} = takeServe(args);
-    const {values, positionals} = parseArgs({
-      args: rest,
-      allowPositionals: true,
-      options: {
-        out: {type: 'string'},
-        to: {type: 'string'},
-        template: {type: 'string'},
-        'allow-html': {type: 'boolean'},
-        'allow-outside': {type: 'boolean'},
-      },
-    });
-    const report = oneReport('watch', positionals);
-    const name = path.basename(report, path.extname(report));
-    let server: OutServer | undefined;
-    const session = await watchReport(report, {
-      out: values.out,
-      allowOutside: values['allow-outside'],
-      formats: values.to === undefined ? undefined : parseFormats(values.to),
-      template: values.template,
-      allowHtml: values['allow-html'],
-      onBuild: (outcome) => announce(outcome, io, paint, report, server),
-    });
-    if (serve !== undefined) {
-      try {
-        server = await serveOut(session.outDir, `${name}.html`, serve);
-      } catch (error) {
-        await session.close();
-        throw new UsageError(`cannot serve on port ${serve}: ${(error as Error).message}`);
-      }
+export async function run({args, io, paint}: CommandContext): Promise<number> {
+  const {rest, serve} = takeServe(args);
+  const {values, positionals} = parseArgs({
+    args: rest,
+    allowPositionals: true,
+    options: {
+      out: {type: 'string'},
+      to: {type: 'string'},
+      template: {type: 'string'},
+      'allow-html': {type: 'boolean'},
+      'allow-outside': {type: 'boolean'},
+    },
+  });
+  const report = oneReport('watch', positionals);
+  const name = path.basename(report, path.extname(report));
+  let server: OutServer | undefined;
+  const session = await watchReport(report, {
+    out: values.out,
+    allowOutside: values['allow-outside'],
+    formats: values.to === undefined ? undefined : parseFormats(values.to),
+    template: values.template,
+    allowHtml: values['allow-html'],
+    onBuild: (outcome) => announce(outcome, io, paint, report, server),
+  });
+  if (serve !== undefined) {
+    try {
+      server = await serveOut(session.outDir, `${name}.html`, serve);
+    } catch (error) {
+      await session.close();
+      throw new UsageError(`cannot serve on port ${serve}: ${(error as Error).message}`);
     }
-    io.stdout(`Watching ${path.relative(process.cwd(), report) || report}, its data and templates (Ctrl-C to stop)\n`);
-    if (server) io.stdout(`Serving ${server.url}\n`);
-    await new Promise<void>((resolve) => process.once('SIGINT', () => resolve()));
-    await Promise.all([session.close(), server?.close()]);
-    io.stdout('Stopped watching.\n');
-    return 0;
-  },
-};
+  }
+  io.stdout(`Watching ${path.relative(process.cwd(), report) || report}, its data and templates (Ctrl-C to stop)\n`);
+  if (server) io.stdout(`Serving ${server.url}\n`);
+  await new Promise<void>((resolve) => process.once('SIGINT', () => resolve()));
+  await Promise.all([session.close(), server?.close()]);
+  io.stdout('Stopped watching.\n');
+  return 0;
+}
 
 /** Print one build's outcome and tell served pages. */
 function announce(outcome: BuildOutcome, io: CliIo, paint: Paint, report: string, server: OutServer | undefined): void {
