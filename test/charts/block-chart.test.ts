@@ -163,6 +163,8 @@ describe('blockChart with chart: auto', () => {
 describe('blockChart with an explicit chart', () => {
   it('honours a kind that fits the design', async () => {
     const report = [
+      // A catalogue of chart kinds, not a family of tests.
+      '---\nstet:\n  lint: {off: [undisclosed-multiplicity]}\n---',
       '```stet\nid: q\ntest: one-sample-t\ndata: d.csv\ny: y\nmu: 21\nchart: qq\n```',
       '```stet\nid: s\ntest: welch-t\ndata: d.csv\ny: y\nby: g2\nchart: strip\n```',
       '```stet\nid: d\ntest: describe\ndata: d.csv\ny: y\nby: g3\nchart: box\n```',
