@@ -10,6 +10,9 @@ export default defineConfig({
     setupFiles: ['test/setup-fast-check.ts'],
     exclude: ['test/bench/**', 'test/fuzz/**', 'node_modules/**'],
     reporters: ['default'],
+    // vitest runs cores − 1 workers by default: one on a 2-core machine. Much of
+    // the suite waits (watchers, a browser, pdflatex), so two workers halve it.
+    maxWorkers: 2,
     testTimeout: 30_000,
     env: {TZ: 'UTC', NO_COLOR: '1'},
   },
