@@ -113,7 +113,7 @@ describe('building the sample report', () => {
     expect(markdown).not.toContain('```stet');
     expect(html).not.toContain('{{');
     // regimes-pairs: the post-hoc comparisons after the regimes ANOVA.
-    const charted = ['supplier-28d', 'supplier-7d', 'curing', 'regimes', 'regimes-pairs', 'wc-slope'];
+    const charted = ['supplier-28d', 'quarrybank-spec', 'supplier-7d', 'curing', 'regimes', 'regimes-pairs', 'wc-slope', 'deliveries'];
     // …and the family's forest plot, placed after the family's last block.
     expect(html.match(/<svg/g)).toHaveLength(charted.length + 1);
     expect(html).toMatch(/<figure class="stet-chart" id="fig-family-suppliers"><svg[^]*?<figcaption class="stet-caption"><strong>Figure \d\.<\/strong> The 2 estimates of family “suppliers”/);
