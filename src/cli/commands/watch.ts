@@ -1,37 +1,20 @@
 import path from 'node:path';
-import {parseArgs} from 'node:util';
 import {isUserError} from '../../user-error.js';
 import {defaultPort, serveOut, type OutServer} from '../../serve/serve-out.js';
 import {rebuildSummary} from '../../watch/rebuild-summary.js';
 import {watchReport, type BuildOutcome} from '../../watch/watch-report.js';
 import {UsageError, type CliIo, type CommandContext} from '../command.js';
 import {formatMessage, formatUserError, noPaint, type Paint} from '../format-message.js';
-import {oneReport} from '../one-report.js';
-import {parseFormats} from './build.js';
+import {parseBuildArguments} from '../build-arguments.js';
 import {printMessages} from '../print-messages.js';
 
 export async function run({args, io, paint}: CommandContext): Promise<number> {
   const {rest, serve} = takeServe(args);
-  const {values, positionals} = parseArgs({
-    args: rest,
-    allowPositionals: true,
-    options: {
-      out: {type: 'string'},
-      to: {type: 'string'},
-      template: {type: 'string'},
-      'allow-html': {type: 'boolean'},
-      'allow-outside': {type: 'boolean'},
-    },
-  });
-  const report = oneReport('watch', positionals);
+  const {report, options} = parseBuildArguments('watch', rest);
   const name = path.basename(report, path.extname(report));
   let server: OutServer | undefined;
   const session = await watchReport(report, {
-    out: values.out,
-    allowOutside: values['allow-outside'],
-    formats: values.to === undefined ? undefined : parseFormats(values.to),
-    template: values.template,
-    allowHtml: values['allow-html'],
+    ...options,
     onBuild: (outcome) => announce(outcome, io, paint, report, server),
   });
   if (serve !== undefined) {
