@@ -31,7 +31,7 @@ function regressionDetails(block: ComputedBlock): RegressionDetails | undefined 
 }
 
 export function scatterChart(block: ComputedBlock, design: BivariateDesign): ChartDraft {
-  const {names, units, spec} = block;
+  const {names, units, xUnits, spec} = block;
   const xSample = design.x[0]!;
   const xName = names.samples[0] ?? xSample.label;
   const yName = names.samples[names.samples.length - 1] ?? design.y.label;
@@ -39,7 +39,14 @@ export function scatterChart(block: ComputedBlock, design: BivariateDesign): Cha
   const decimals = summaryDecimals(design.y.values);
   const level = levelText(spec.confidence);
   const details = regressionDetails(block);
-  const common = {x: xSample.values, y: design.y.values, xTitle: capitalize(xName), yTitle: capitalize(yName), ...(units ? {yUnits: units} : {})};
+  const common = {
+    x: xSample.values,
+    y: design.y.values,
+    xTitle: capitalize(xName),
+    yTitle: capitalize(yName),
+    ...(xUnits ? {xUnits} : {}),
+    ...(units ? {yUnits: units} : {}),
+  };
   const head = `Scatter plot of ${withUnits(yName, units)} against ${xName}, ${n} points`;
   if (details) {
     const hasIntercept = spec.intercept;

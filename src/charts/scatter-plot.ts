@@ -10,6 +10,7 @@ export interface ScatterInput {
   readonly x: Float64Array;
   readonly y: Float64Array;
   readonly xTitle: string;
+  readonly xUnits?: string;
   readonly yTitle: string;
   readonly yUnits?: string;
   /** The band to shade and the line through its middle (regression). */
@@ -29,7 +30,7 @@ export function completePairs(x: Float64Array, y: Float64Array): {x: number; y: 
 export function scatterSpec(input: ScatterInput): TopLevelSpec {
   const points = completePairs(input.x, input.y);
   if (points.length === 0) throw new Error('scatterSpec: needs at least one complete pair');
-  const x = {field: 'x', type: 'quantitative' as const, title: input.xTitle, scale: {zero: false, nice: true}};
+  const x = {field: 'x', type: 'quantitative' as const, title: input.xUnits ? `${input.xTitle} (${input.xUnits})` : input.xTitle, scale: {zero: false, nice: true}};
   const y = {field: 'y', type: 'quantitative' as const, title: input.yUnits ? `${input.yTitle} (${input.yUnits})` : input.yTitle, scale: {zero: false, nice: true}};
   const layers: unknown[] = [];
   if (input.band) {

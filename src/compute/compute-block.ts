@@ -26,6 +26,8 @@ export interface ComputedBlock {
   readonly rows: RowAccount;
   /** Units of the outcome column, from the dataset. */
   readonly units: string | undefined;
+  /** Units of the (first) predictor `x`, for axis titles. */
+  readonly xUnits?: string | undefined;
   /** Words for the outcome and for each sample, from the dataset's `labels`. */
   readonly names: {readonly outcome: string; readonly by: string; readonly samples: readonly string[]};
 }
@@ -56,6 +58,7 @@ export function computeBlock(declared: BlockSpec, dataset: Dataset, keep: Uint8A
     groups: Object.fromEntries(samplesOf(design).map((sample) => [sample.label, describeSample(sample, spec.method === 'describe')])),
     rows,
     units,
+    xUnits: spec.x?.[0] === undefined ? undefined : own(dataset.units, spec.x[0]),
     names: {
       outcome: typeof spec.y === 'string' ? label(spec.y) : 'value',
       by: spec.by === undefined ? '' : label(spec.by),

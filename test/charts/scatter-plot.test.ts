@@ -33,6 +33,12 @@ describe('scatterSpec', () => {
     await expect(first.svg).toMatchFileSnapshot('./__snapshots__/scatter-plot.svg');
   });
 
+  it('titles both axes with their units', () => {
+    const spec = scatterSpec({x, y, xTitle: 'Dose', xUnits: 'kg/m³', yTitle: 'Strength', yUnits: 'MPa', band}) as {layer: {encoding: {x: {title: string}; y: {title: string}}}[]};
+    expect(spec.layer[0]!.encoding.x.title).toBe('Dose (kg/m³)');
+    expect(spec.layer[0]!.encoding.y.title).toBe('Strength (MPa)');
+  });
+
   it('pairs values row by row and refuses misaligned columns', () => {
     expect(completePairs(Float64Array.from([1, NaN, 3]), Float64Array.from([4, 5, NaN]))).toEqual([{x: 1, y: 4}]);
     expect(() => completePairs(Float64Array.from([1]), Float64Array.from([1, 2]))).toThrow(/values/);
