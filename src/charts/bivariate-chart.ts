@@ -5,7 +5,7 @@
  */
 import type {ComputedBlock} from '../compute/compute-block.js';
 import {decimalsForWidth, formatFixed} from '../interpret/format-number.js';
-import {capitalize} from '../interpret/wording.js';
+import {capitalize, chartWords} from '../interpret/wording.js';
 import {linearRegression} from '../methods/linear-regression.js';
 import {MethodError} from '../methods/method-error.js';
 import type {BivariateDesign} from '../methods/types.js';
@@ -47,7 +47,8 @@ export function scatterChart(block: ComputedBlock, design: BivariateDesign): Cha
     ...(xUnits ? {xUnits} : {}),
     ...(units ? {yUnits: units} : {}),
   };
-  const head = `Scatter plot of ${withUnits(yName, units)} against ${xName}, ${n} points`;
+  const words = chartWords.scatter;
+  const head = words.head(withUnits(yName, units), xName, n);
   if (details) {
     const hasIntercept = spec.intercept;
     const intercept = hasIntercept ? details.coefficients[0]!.estimate : 0;
@@ -55,19 +56,20 @@ export function scatterChart(block: ComputedBlock, design: BivariateDesign): Cha
     const band = regressionBand({x: xSample.values, intercept, slope: slope.estimate, residualSd: details.residual_sd, residualDf: details.anova_table.residual.df, confidence: spec.confidence, hasIntercept});
     return {
       spec: scatterSpec({...common, band}),
-      title: spec.caption ?? `${capitalize(yName)} against ${xName}`,
-      description:
-        `${head}, with the least-squares line ${fitText({intercept, slope: slope.estimate}, decimals, slopeDecimals(slope.ci))} (slope ${intervalText(slope.ci, slopeDecimals(slope.ci), spec.confidence)}) ` +
-        `and, shaded, its pointwise ${level} confidence band for the mean response.`,
+      title: spec.caption ?? words.title(yName, xName),
+      description: words.regression(
+        head,
+        fitText({intercept, slope: slope.estimate}, decimals, slopeDecimals(slope.ci)),
+        intervalText(slope.ci, slopeDecimals(slope.ci), spec.confidence),
+        level,
+      ),
     };
   }
   const line = leastSquaresLine(block, design);
   return {
     spec: scatterSpec({...common, ...(line ? {line} : {})}),
-    title: spec.caption ?? `${capitalize(yName)} against ${xName}`,
-    description: line
-      ? `${head}. The dashed least-squares line ${fitText(line, decimals, decimals + 1)} is a guide to the eye; the test is of the ${spec.method === 'pearson' ? 'linear' : 'monotone (rank)'} association, and no band is drawn.`
-      : `${head}.`,
+    title: spec.caption ?? words.title(yName, xName),
+    description: line ? words.correlation(head, fitText(line, decimals, decimals + 1), spec.method === 'pearson') : words.noLine(head),
   };
 }
 
@@ -114,8 +116,8 @@ export function coefficientsChart(block: ComputedBlock): ChartDraft | undefined 
   const parts = slopes.map((c) => `${label(c.term)} ${formatFixed(c.estimate, slopeDecimals(c.ci))} (${intervalText(c.ci, slopeDecimals(c.ci), spec.confidence)})`);
   const yName = names.samples[names.samples.length - 1] ?? names.outcome;
   return {
-    spec: intervalPlotSpec({rows, xTitle: `Slope of ${yName}`}),
-    title: spec.caption ?? `Regression slopes for ${yName}`,
-    description: `Interval plot of the ${slopes.length} regression slopes for ${yName}, each with its ${levelText(spec.confidence)} confidence interval, against a dashed line at zero: ${parts.join('; ')}.`,
+    spec: intervalPlotSpec({rows, xTitle: chartWords.slopes.axis(yName)}),
+    title: spec.caption ?? chartWords.slopes.title(yName),
+    description: chartWords.slopes.description(slopes.length, yName, levelText(spec.confidence), parts),
   };
 }

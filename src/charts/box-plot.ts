@@ -3,6 +3,7 @@
  * groups (and, with `paired`, the two conditions of a paired design).
  */
 import type {TopLevelSpec} from 'vega-lite';
+import {chartWords} from '../interpret/wording.js';
 import {summarize} from '../methods/shared/summarize.js';
 import type {Sample} from '../methods/types.js';
 import {boxStats} from './box-stats.js';
@@ -215,7 +216,7 @@ export function boxPlotLayer(input: BoxPlotInput) {
           x: sideX,
           y: centreY,
           // A one-entry legend says what the diamond is.
-          shape: {datum: input.centreLabel ?? 'mean', type: 'nominal' as const, scale: {range: ['diamond']}, legend},
+          shape: {datum: input.centreLabel ?? chartWords.mean, type: 'nominal' as const, scale: {range: ['diamond']}, legend},
         },
       },
       {

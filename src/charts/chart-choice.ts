@@ -1,4 +1,5 @@
 import type {ComputedBlock} from '../compute/compute-block.js';
+import {chartWords} from '../interpret/wording.js';
 import {placeOfKey, type ChartKind} from '../spec/block-spec.js';
 import {UserError} from '../user-error.js';
 
@@ -60,10 +61,10 @@ export function chooseChart(block: ComputedBlock): DrawnChart | undefined {
   }
   const fitting = fittingKinds(block);
   if (!fitting.includes(spec.chart)) {
-    throw new UserError(`\`chart: ${spec.chart}\` does not fit ${describeDesign(block)}`, {
+    throw new UserError(chartWords.choice.notFitting(spec.chart, describeDesign(block)), {
       ruleId: 'chart-not-applicable',
       place: placeOfKey(spec, 'chart'),
-      hint: `Charts that fit this block: ${['auto', ...fitting, 'none'].map((k) => `\`${k}\``).join(', ')}.`,
+      hint: chartWords.choice.fitting(['auto', ...fitting, 'none']),
     });
   }
   return {kind: spec.chart as DrawnChart['kind']};
@@ -71,20 +72,21 @@ export function chooseChart(block: ComputedBlock): DrawnChart | undefined {
 
 function describeDesign(block: ComputedBlock): string {
   const {design, spec} = block;
-  const method = spec.method === 'describe' ? 'a describe block' : `a \`${spec.method}\` block`;
+  const words = chartWords.choice;
+  const method = words.block(spec.method);
   switch (design.kind) {
     case 'two-group':
     case 'k-group':
-      return `${method}: it compares groups of a numeric outcome`;
+      return words.groups(method);
     case 'paired':
-      return `${method}: it compares two paired measurements`;
+      return words.paired(method);
     case 'one-sample':
-      return `${method}: it has one numeric sample`;
+      return words.oneSample(method);
     case 'none':
-      return `${method} with ${design.samples.length} groups`;
+      return words.samples(method, design.samples.length);
     case 'bivariate':
-      return design.x.length === 1 ? `${method}: it relates two numeric columns` : `${method} with ${design.x.length} predictors (no single x axis)`;
+      return design.x.length === 1 ? words.pair(method) : words.predictors(method, design.x.length);
     default:
-      return `${method}: its outcome is categorical (counts)`;
+      return words.categorical(method);
   }
 }

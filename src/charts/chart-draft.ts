@@ -1,5 +1,6 @@
 import type {TopLevelSpec} from 'vega-lite';
 import {formatFixed, recordedDecimals} from '../interpret/format-number.js';
+import {chartWords} from '../interpret/wording.js';
 
 /** A chart before rendering: its vega-lite spec and its accessible name and description. */
 export interface ChartDraft {
@@ -33,7 +34,8 @@ export function levelText(confidence: number): string {
 /** `95% CI 30.1 to 32.3`; an infinite bound (one-sided interval) is said as such. */
 export function intervalText(ci: readonly [number, number], decimals: number, confidence: number): string {
   const [lo, hi] = ci;
-  if (lo === -Infinity) return `one-sided ${levelText(confidence)} upper bound ${formatFixed(hi, decimals)}`;
-  if (hi === Infinity) return `one-sided ${levelText(confidence)} lower bound ${formatFixed(lo, decimals)}`;
-  return `${levelText(confidence)} CI ${formatFixed(lo, decimals)} to ${formatFixed(hi, decimals)}`;
+  const level = levelText(confidence);
+  if (lo === -Infinity) return chartWords.upperBound(level, formatFixed(hi, decimals));
+  if (hi === Infinity) return chartWords.lowerBound(level, formatFixed(lo, decimals));
+  return chartWords.interval(level, formatFixed(lo, decimals), formatFixed(hi, decimals));
 }

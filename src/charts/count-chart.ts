@@ -5,7 +5,7 @@
  */
 import type {ComputedBlock} from '../compute/compute-block.js';
 import {formatFixed, formatPercent} from '../interpret/format-number.js';
-import {capitalize} from '../interpret/wording.js';
+import {capitalize, chartWords} from '../interpret/wording.js';
 import {wilsonInterval} from '../methods/shared/wilson-interval.js';
 import type {Design} from '../methods/types.js';
 import {barChartSpec, type Bar} from './bar-chart.js';
@@ -29,11 +29,12 @@ export function countChart(block: ComputedBlock, design: Categorical): ChartDraf
 /** `3 of 20 (15%, 95% Wilson CI 5.2% to 36.0%)`. */
 function proportionText(successes: number, trials: number, ci: readonly [number, number], confidence: number): string {
   const pct = (v: number) => `${formatFixed(100 * v, 1)}%`;
-  return `${successes} of ${trials} (${formatPercent(successes / trials)}, two-sided ${levelText(confidence)} Wilson CI ${pct(ci[0])} to ${pct(ci[1])})`;
+  return chartWords.counts.proportion(successes, trials, formatPercent(successes / trials), levelText(confidence), pct(ci[0]), pct(ci[1]));
 }
 
 function groupProportions(block: ComputedBlock, design: Extract<Categorical, {kind: 'contingency'}>): ChartDraft {
   const {spec, names} = block;
+  const by = names.by || chartWords.group;
   const success = design.success!;
   const row = design.rows.indexOf(success);
   const parts: string[] = [];
@@ -45,20 +46,21 @@ function groupProportions(block: ComputedBlock, design: Extract<Categorical, {ki
     return {group, category: success, value: trials > 0 ? successes / trials : 0, ...(ci ? {ci} : {})};
   });
   return {
-    spec: barChartSpec({bars, xTitle: capitalize(names.by || 'group'), yTitle: `Proportion ${success}`, proportion: true}),
-    title: spec.caption ?? `Proportion ${success} by ${names.by || 'group'}`,
-    description: `Bar chart of the proportion of ${names.outcome} = ${success} by ${names.by || 'group'}, each bar with its Wilson interval: ${parts.join('; ')}.`,
+    spec: barChartSpec({bars, xTitle: capitalize(by), yTitle: chartWords.counts.proportionAxis(success), proportion: true}),
+    title: spec.caption ?? chartWords.counts.proportionTitle(success, by),
+    description: chartWords.counts.groupProportions(names.outcome, success, by, parts),
   };
 }
 
 function contingencyCounts(block: ComputedBlock, design: Extract<Categorical, {kind: 'contingency'}>): ChartDraft {
   const {spec, names} = block;
+  const by = names.by || chartWords.group;
   const bars: Bar[] = design.columns.flatMap((group, j) => design.rows.map((category, i) => ({group, category, value: design.counts[i]?.[j] ?? 0})));
   const parts = design.columns.map((group, j) => `${group}: ${design.rows.map((category, i) => `${category} ${design.counts[i]?.[j] ?? 0}`).join(', ')}`);
   return {
-    spec: barChartSpec({bars, xTitle: capitalize(names.by || 'group'), yTitle: 'Count', categoryTitle: names.outcome}),
-    title: spec.caption ?? `${capitalize(names.outcome)} by ${names.by || 'group'}`,
-    description: `Grouped bar chart of counts of ${names.outcome} by ${names.by || 'group'}: ${parts.join('; ')}.`,
+    spec: barChartSpec({bars, xTitle: capitalize(by), yTitle: chartWords.count, categoryTitle: names.outcome}),
+    title: spec.caption ?? chartWords.byTitle(names.outcome, by),
+    description: chartWords.counts.contingency(names.outcome, by, parts),
   };
 }
 
@@ -68,9 +70,9 @@ function pairedCounts(block: ComputedBlock, design: Extract<Categorical, {kind: 
   const bars: Bar[] = design.levels.flatMap((group, i) => design.levels.map((category, j) => ({group, category, value: design.table[i]![j]!})));
   const parts = design.levels.map((group, i) => `${firstName} ${group}: ${design.levels.map((category, j) => `${secondName} ${category} ${design.table[i]![j]!}`).join(', ')}`);
   return {
-    spec: barChartSpec({bars, xTitle: capitalize(firstName), yTitle: 'Subjects', categoryTitle: secondName}),
-    title: spec.caption ?? `${capitalize(firstName)} and ${secondName}, paired`,
-    description: `Grouped bar chart of the subjects by ${firstName} (groups) and ${secondName} (bars); the discordant bars are the pairs that changed: ${parts.join('; ')}.`,
+    spec: barChartSpec({bars, xTitle: capitalize(firstName), yTitle: chartWords.counts.subjects, categoryTitle: secondName}),
+    title: spec.caption ?? chartWords.paired.title(capitalize(firstName), secondName),
+    description: chartWords.counts.paired(firstName, secondName, parts),
   };
 }
 
@@ -78,14 +80,14 @@ function fitCounts(block: ComputedBlock, design: Extract<Categorical, {kind: 'co
   const {spec, names, outcome} = block;
   const expected = (outcome?.details?.['expected'] as readonly number[] | undefined) ?? [];
   const bars: Bar[] = design.levels.flatMap((group, i) => [
-    {group, category: 'observed', value: design.counts[i] ?? 0},
-    ...(expected[i] === undefined ? [] : [{group, category: 'expected', value: expected[i]!}]),
+    {group, category: chartWords.counts.observed, value: design.counts[i] ?? 0},
+    ...(expected[i] === undefined ? [] : [{group, category: chartWords.counts.expected, value: expected[i]!}]),
   ]);
-  const parts = design.levels.map((group, i) => `${group} ${design.counts[i] ?? 0}${expected[i] === undefined ? '' : ` (expected ${formatFixed(expected[i]!, 1)})`}`);
+  const parts = design.levels.map((group, i) => chartWords.counts.fitPart(group, design.counts[i] ?? 0, expected[i] === undefined ? undefined : formatFixed(expected[i]!, 1)));
   return {
-    spec: barChartSpec({bars, xTitle: capitalize(names.outcome), yTitle: 'Count', categoryTitle: null}),
-    title: spec.caption ?? `Observed and expected counts of ${names.outcome}`,
-    description: `Grouped bar chart of the observed counts of ${names.outcome} beside the counts expected under the null hypothesis: ${parts.join('; ')}.`,
+    spec: barChartSpec({bars, xTitle: capitalize(names.outcome), yTitle: chartWords.count, categoryTitle: null}),
+    title: spec.caption ?? chartWords.counts.fitTitle(names.outcome),
+    description: chartWords.counts.fit(names.outcome, parts),
   };
 }
 
@@ -97,13 +99,16 @@ function oneProportion(block: ComputedBlock, design: Extract<Categorical, {kind:
     spec: barChartSpec({
       bars: [{group: design.success, category: design.success, value: design.successes / design.trials, ci}],
       xTitle: capitalize(names.outcome),
-      yTitle: `Proportion ${design.success}`,
+      yTitle: chartWords.counts.proportionAxis(design.success),
       proportion: true,
       ...(p0 === undefined ? {} : {reference: p0}),
     }),
-    title: spec.caption ?? `Proportion ${design.success}`,
-    description:
-      `Bar chart of the proportion of ${names.outcome} = ${design.success}: ${proportionText(design.successes, design.trials, ci, spec.confidence)}` +
-      `${p0 === undefined ? '' : `; a dashed line marks the null proportion ${formatFixed(p0, 3)}`}.`,
+    title: spec.caption ?? chartWords.counts.proportionAxis(design.success),
+    description: chartWords.counts.oneProportion(
+      names.outcome,
+      design.success,
+      proportionText(design.successes, design.trials, ci, spec.confidence),
+      p0 === undefined ? undefined : formatFixed(p0, 3),
+    ),
   };
 }

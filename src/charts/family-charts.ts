@@ -3,9 +3,9 @@
  * blocks' estimates with their intervals (`charts/family-NAME.svg`).
  */
 import type {InterpretedBlock} from '../interpret/result-record.js';
-import {capitalize} from '../interpret/wording.js';
+import {capitalize, chartWords} from '../interpret/wording.js';
 import {decimalsForWidth, pClause} from '../interpret/format-number.js';
-import {intervalText, levelText, quantity, type ChartDraft} from './chart-draft.js';
+import {intervalText, levelText, quantity, withUnits, type ChartDraft} from './chart-draft.js';
 import {intervalPlotSpec} from './interval-plot.js';
 import {renderDraft, type RenderedChart} from './render-draft.js';
 
@@ -34,23 +34,21 @@ export function familyDraft(name: string, members: readonly InterpretedBlock[]):
   const units = new Set(estimates.map((e) => e.estimate.units));
   const shared = units.size === 1 ? [...units][0] : undefined;
   const names = new Set(estimates.map((e) => e.estimate.name.replace(/\s*\(.*\)$/, '')));
-  const xTitle = names.size === 1 ? capitalize([...names][0]!) : 'Estimate';
+  const xTitle = names.size === 1 ? capitalize([...names][0]!) : chartWords.family.axis;
   const rows = estimates.map((e) => ({label: e.id, estimate: e.estimate.value, ci: e.estimate.ci}));
   const parts = estimates.map((e) => {
     const finite = e.estimate.ci.filter(Number.isFinite);
     const decimals = finite.length === 2 ? decimalsForWidth(finite[1]! - finite[0]!) : 2;
     const {p, p_adjusted: adjusted} = e.block.result;
-    const pText = typeof adjusted === 'number' ? `, ${pClause(adjusted, undefined, 'adjusted p')}` : typeof p === 'number' ? `, ${pClause(p)}` : '';
+    const pText = typeof adjusted === 'number' ? `, ${pClause(adjusted, undefined, chartWords.adjustedP)}` : typeof p === 'number' ? `, ${pClause(p)}` : '';
     return `${e.id}, ${e.estimate.name}: ${quantity(e.estimate.value, decimals, e.estimate.units)} (${intervalText(e.estimate.ci, decimals, e.estimate.level)})${pText}`;
   });
   // Ratios (odds ratio, risk ratio) have no effect at 1, differences at 0.
   const reference = estimates.every((e) => /ratio/i.test(e.estimate.name)) ? 1 : 0;
   const levels = new Set(estimates.map((e) => levelText(e.estimate.level)));
   return {
-    spec: intervalPlotSpec({rows, reference, xTitle: shared ? `${xTitle} (${shared})` : xTitle}),
-    title: `Family ${name}: estimates with their intervals`,
-    description:
-      `Forest plot of the ${estimates.length} estimates of family ${name}, each with its ${[...levels].join(' or ')} confidence interval ` +
-      `(intervals not adjusted for the family), against a dashed line at ${reference === 1 ? 'one' : 'zero'}: ${parts.join('; ')}.`,
+    spec: intervalPlotSpec({rows, reference, xTitle: withUnits(xTitle, shared)}),
+    title: chartWords.family.title(name),
+    description: chartWords.family.description(estimates.length, name, [...levels], reference === 1, parts),
   };
 }

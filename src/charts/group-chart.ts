@@ -5,7 +5,7 @@
 import {samplesOf, type ComputedBlock} from '../compute/compute-block.js';
 import {summarize} from '../methods/shared/summarize.js';
 import {formatFixed, pClause} from '../interpret/format-number.js';
-import {capitalize} from '../interpret/wording.js';
+import {capitalize, chartWords} from '../interpret/wording.js';
 import {boxPlotSpec} from './box-plot.js';
 import {intervalText, levelText, quantity, summaryDecimals, withUnits, type ChartDraft} from './chart-draft.js';
 import {intervalPlotSpec} from './interval-plot.js';
@@ -18,33 +18,24 @@ export function groupChart(block: ComputedBlock, boxes: boolean): ChartDraft {
   const all = samples.flatMap((s) => Array.from(s.values));
   const decimals = summaryDecimals(all);
   const level = levelText(spec.confidence);
-  const outcome = capitalize(names.outcome);
-  const byText = names.by ? ` by ${names.by}` : '';
   const parts = samples.map((s, i) => {
     const {n, median, mean} = summarize(s.values.filter(Number.isFinite));
     const ci = intervals[i];
-    return `${s.label} n = ${n}, median ${quantity(median, decimals, units)}, mean ${formatFixed(mean, decimals)}${ci ? ` (${intervalText(ci, decimals, spec.confidence)})` : ''}`;
+    return chartWords.groups.part(s.label, n, quantity(median, decimals, units), formatFixed(mean, decimals), ci ? intervalText(ci, decimals, spec.confidence) : undefined);
   });
-  const drawn = boxes
-    ? 'Every observation is a point; boxes show the quartiles and median, whiskers reach the furthest point within 1.5 IQR of the box'
-    : 'Every observation is a point';
   // Groups without an interval (one value, no spread) show the mean alone.
   const complete = intervals.every((ci) => ci !== undefined);
-  const description =
-    `${boxes ? 'Box plot' : 'Strip plot'} of ${withUnits(names.outcome, units)}${byText}: ${parts.join('; ')}. ` +
-    `${drawn}; a diamond with a bar beside each group marks its mean and ${level} confidence interval` +
-    `${complete ? '' : ' (a group with one value or no spread has its mean alone)'}.`;
   return {
     spec: boxPlotSpec({
       samples,
-      yTitle: outcome,
+      yTitle: capitalize(names.outcome),
       ...(units ? {units} : {}),
       boxes,
       intervals,
-      centreLabel: `mean and ${level} CI`,
+      centreLabel: chartWords.groups.centreLegend(level),
     }),
-    title: spec.caption ?? `${outcome}${byText}`,
-    description,
+    title: spec.caption ?? chartWords.byTitle(names.outcome, names.by),
+    description: chartWords.groups.description(boxes, withUnits(names.outcome, units), names.by, parts, level, complete),
   };
 }
 
@@ -58,19 +49,16 @@ export function pairsChart(block: ComputedBlock): ChartDraft | undefined {
   if (!posthoc || posthoc.length === 0) return undefined;
   const {units, spec, names} = block;
   const ranks = posthoc.some((c) => c.ci === null);
-  const what = ranks ? 'difference in mean ranks' : 'difference in means';
+  const what = chartWords.pairs.what(ranks);
   const rows = posthoc.map((c) => ({label: `${c.b} − ${c.a}`, estimate: c.estimate, ci: c.ci}));
   const decimals = summaryDecimals(samplesOf(block.design).flatMap((s) => Array.from(s.values)));
   const u = ranks ? undefined : units;
-  const parts = posthoc.map((c) => {
-    const ci = c.ci ? `, simultaneous ${intervalText(c.ci, decimals, spec.confidence)}` : '';
-    return `${c.b} − ${c.a}: ${quantity(c.estimate, decimals, u)}${ci}, ${pClause(c.p_adjusted, undefined, 'adjusted p')}`;
-  });
+  const parts = posthoc.map((c) =>
+    chartWords.pairs.part(c.b, c.a, quantity(c.estimate, decimals, u), c.ci ? intervalText(c.ci, decimals, spec.confidence) : undefined, pClause(c.p_adjusted, undefined, chartWords.adjustedP)),
+  );
   return {
     spec: intervalPlotSpec({rows, xTitle: withUnits(capitalize(what), u)}),
-    title: `Pairwise comparisons of ${names.outcome}${names.by ? ` by ${names.by}` : ''}`,
-    description:
-      `Interval plot of every pairwise ${what} of ${names.outcome}${ranks ? '' : ` with simultaneous ${levelText(spec.confidence)} intervals`}, ` +
-      `against a dashed line at zero: ${parts.join('; ')}.`,
+    title: chartWords.pairs.title(names.outcome, names.by),
+    description: chartWords.pairs.description(what, names.outcome, ranks ? undefined : levelText(spec.confidence), parts),
   };
 }

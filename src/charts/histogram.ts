@@ -3,6 +3,7 @@
  * marked: the chart of a one-sample test.
  */
 import type {TopLevelSpec} from 'vega-lite';
+import {chartWords} from '../interpret/wording.js';
 import {clampInterval, extentOf} from './interval-bounds.js';
 import {ink, palette, schema, sizes} from './theme.js';
 
@@ -36,7 +37,7 @@ export function histogramSpec(input: HistogramInput): TopLevelSpec {
       mark: {type: 'bar', color: palette[0], opacity: 0.55, stroke: 'white', strokeWidth: 0.5},
       encoding: {
         x: {...x, bin: {maxbins: input.maxBins ?? Math.max(5, Math.ceil(Math.log2(values.length)) + 1), extent: [...extent]}},
-        y: {aggregate: 'count', type: 'quantitative', title: 'Count', axis: {tickMinStep: 1}},
+        y: {aggregate: 'count', type: 'quantitative', title: chartWords.count, axis: {tickMinStep: 1}},
       },
     },
   ];

@@ -3,7 +3,7 @@
  * normal Q–Q plot of a normality check.
  */
 import type {ComputedBlock} from '../compute/compute-block.js';
-import {capitalize} from '../interpret/wording.js';
+import {capitalize, chartWords} from '../interpret/wording.js';
 import {summarize} from '../methods/shared/summarize.js';
 import type {Sample} from '../methods/types.js';
 import {intervalText, levelText, quantity, summaryDecimals, withUnits, type ChartDraft} from './chart-draft.js';
@@ -19,17 +19,18 @@ export function histogramChart(block: ComputedBlock, sample: Sample): ChartDraft
   // A test's own estimate (the mean and its interval, one-sided if the test is); else the mean's t interval.
   const ci = outcome?.estimate?.ci ?? meanInterval(values, spec.confidence);
   const level = outcome?.estimate?.level ?? spec.confidence;
-  const name = outcome?.estimate?.name ?? 'mean';
-  const estimate = ci ? {value: outcome?.estimate?.value ?? mean, ci, label: `${name}, ${ci.some((b) => !Number.isFinite(b)) ? 'one-sided ' : ''}${levelText(level)} CI`} : undefined;
-  const reference = spec.mu === undefined ? undefined : {value: spec.mu, label: `μ₀ = ${quantity(spec.mu, decimals - 1 < 0 ? 0 : decimals - 1, units)}`};
+  const name = outcome?.estimate?.name ?? chartWords.mean;
+  const words = chartWords.histogram;
+  const estimate = ci ? {value: outcome?.estimate?.value ?? mean, ci, label: chartWords.estimateLegend(name, levelText(level), ci.some((b) => !Number.isFinite(b)))} : undefined;
+  const reference = spec.mu === undefined ? undefined : {value: spec.mu, label: words.nullLabel(quantity(spec.mu, decimals - 1 < 0 ? 0 : decimals - 1, units))};
   const parts = [
-    `Histogram of ${withUnits(names.outcome, units)}, n = ${n}, median ${quantity(median, decimals, units)}.`,
-    ...(estimate ? [`The ${name} ${quantity(estimate.value, decimals, units)} and its ${intervalText(ci!, decimals, level)} are drawn as a diamond with a bar at the top.`] : []),
-    ...(reference ? [`A dashed line marks the null value ${quantity(reference.value, decimals, units)}.`] : []),
+    words.summary(withUnits(names.outcome, units), n, quantity(median, decimals, units)),
+    ...(estimate ? [words.estimate(name, quantity(estimate.value, decimals, units), intervalText(ci!, decimals, level))] : []),
+    ...(reference ? [words.nullValue(quantity(reference.value, decimals, units))] : []),
   ];
   return {
     spec: histogramSpec({values, xTitle: capitalize(names.outcome), ...(units ? {units} : {}), ...(reference ? {reference} : {}), ...(estimate ? {estimate} : {})}),
-    title: spec.caption ?? `Distribution of ${names.outcome}`,
+    title: spec.caption ?? words.title(names.outcome),
     description: parts.join(' '),
   };
 }
@@ -41,10 +42,7 @@ export function qqChart(block: ComputedBlock, sample: Sample): ChartDraft {
   const line = qqLine(values);
   return {
     spec: qqPlotSpec({values, yTitle: capitalize(names.outcome), ...(units ? {units} : {})}),
-    title: spec.caption ?? `Normal Q–Q plot of ${names.outcome}`,
-    description:
-      `Normal Q–Q plot of ${withUnits(names.outcome, units)}, n = ${values.length}: each sorted value against the standard normal quantile at its plotting position. ` +
-      `The dashed line passes through the quartiles (intercept ${quantity(line.intercept, decimals, units)}, slope ${quantity(line.slope, decimals, units)} per standard deviation); ` +
-      `normal data fall near it, bends at the ends indicate heavier or lighter tails, and a curve indicates skew.`,
+    title: spec.caption ?? chartWords.qq.title(names.outcome),
+    description: chartWords.qq.description(withUnits(names.outcome, units), values.length, quantity(line.intercept, decimals, units), quantity(line.slope, decimals, units)),
   };
 }

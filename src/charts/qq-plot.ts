@@ -3,6 +3,7 @@
  */
 import type {TopLevelSpec} from 'vega-lite';
 import {normalQuantile} from '../distributions/normal.js';
+import {chartWords} from '../interpret/wording.js';
 import {ink, palette, schema, sizes} from './theme.js';
 
 export interface QqPlotInput {
@@ -51,7 +52,7 @@ export function qqPlotSpec(input: QqPlotInput): TopLevelSpec {
   if (points.length < 3) throw new Error('qqPlotSpec: needs at least three finite values');
   const {intercept, slope} = qqLine(input.values);
   const ends = [points[0]!.theoretical, points[points.length - 1]!.theoretical];
-  const x = {field: 'theoretical', type: 'quantitative' as const, title: 'Normal quantile', scale: {zero: false, nice: true}};
+  const x = {field: 'theoretical', type: 'quantitative' as const, title: chartWords.qq.axis, scale: {zero: false, nice: true}};
   const y = {field: 'value', type: 'quantitative' as const, title: input.units ? `${input.yTitle} (${input.units})` : input.yTitle, scale: {zero: false, nice: true}};
   return {
     $schema: schema,

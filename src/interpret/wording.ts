@@ -442,3 +442,145 @@ export const appendixWords = {
   coefficientHeader: ['Term', 'Estimate', 'SE', 't', 'p', 'CI'],
   anovaHeader: ['Source', 'SS', 'df', 'MS'],
 };
+
+/**
+ * Every word of stet's charts: titles, axis and legend labels, the `<desc>`
+ * text alternatives, and the errors of a `chart:` that does not fit. Numbers
+ * arrive formatted (src/charts/chart-draft.ts); lists arrive as parts.
+ */
+export const chartWords = {
+  // Shared by several charts.
+  interval: (level: string, lower: string, upper: string) => `${level} CI ${lower} to ${upper}`,
+  upperBound: (level: string, upper: string) => `one-sided ${level} upper bound ${upper}`,
+  lowerBound: (level: string, lower: string) => `one-sided ${level} lower bound ${lower}`,
+  estimateLegend: (name: string, level: string, oneSided = false) => `${name}, ${oneSided ? 'one-sided ' : ''}${level} CI`,
+  byTitle: (outcome: string, by: string) => `${capitalize(outcome)}${by ? ` by ${by}` : ''}`,
+  count: 'Count',
+  mean: 'mean',
+  group: 'group',
+  adjustedP: 'adjusted p',
+
+  // Scatter plot of a correlation or a one-predictor regression.
+  scatter: {
+    title: (y: string, x: string) => `${capitalize(y)} against ${x}`,
+    head: (y: string, x: string, n: number) => `Scatter plot of ${y} against ${x}, ${n} points`,
+    regression: (head: string, line: string, slope: string, level: string) =>
+      `${head}, with the least-squares line ${line} (slope ${slope}) and, shaded, its pointwise ${level} confidence band for the mean response.`,
+    correlation: (head: string, line: string, linear: boolean) =>
+      `${head}. The dashed least-squares line ${line} is a guide to the eye; the test is of the ${linear ? 'linear' : 'monotone (rank)'} association, and no band is drawn.`,
+    noLine: (head: string) => `${head}.`,
+  },
+
+  // Interval plot of a regression's slopes (several predictors).
+  slopes: {
+    axis: (y: string) => `Slope of ${y}`,
+    title: (y: string) => `Regression slopes for ${y}`,
+    description: (count: number, y: string, level: string, parts: readonly string[]) =>
+      `Interval plot of the ${count} regression slopes for ${y}, each with its ${level} confidence interval, against a dashed line at zero: ${parts.join('; ')}.`,
+  },
+
+  // Box or strip plot of numeric groups.
+  groups: {
+    centreLegend: (level: string) => `mean and ${level} CI`,
+    part: (label: string, n: number, median: string, mean: string, interval: string | undefined) =>
+      `${label} n = ${n}, median ${median}, mean ${mean}${interval ? ` (${interval})` : ''}`,
+    description: (boxes: boolean, outcome: string, by: string, parts: readonly string[], level: string, complete: boolean) =>
+      `${boxes ? 'Box plot' : 'Strip plot'} of ${outcome}${by ? ` by ${by}` : ''}: ${parts.join('; ')}. ` +
+      `${boxes ? 'Every observation is a point; boxes show the quartiles and median, whiskers reach the furthest point within 1.5 IQR of the box' : 'Every observation is a point'}; ` +
+      `a diamond with a bar beside each group marks its mean and ${level} confidence interval` +
+      `${complete ? '' : ' (a group with one value or no spread has its mean alone)'}.`,
+  },
+
+  // Interval plot of post-hoc comparisons (`ID-pairs`).
+  pairs: {
+    what: (ranks: boolean) => (ranks ? 'difference in mean ranks' : 'difference in means'),
+    title: (outcome: string, by: string) => `Pairwise comparisons of ${outcome}${by ? ` by ${by}` : ''}`,
+    part: (b: string, a: string, estimate: string, interval: string | undefined, p: string) =>
+      `${b} − ${a}: ${estimate}${interval ? `, simultaneous ${interval}` : ''}, ${p}`,
+    /** `level` undefined: the comparisons have no intervals (Dunn's test). */
+    description: (what: string, outcome: string, level: string | undefined, parts: readonly string[]) =>
+      `Interval plot of every pairwise ${what} of ${outcome}${level === undefined ? '' : ` with simultaneous ${level} intervals`}, ` +
+      `against a dashed line at zero: ${parts.join('; ')}.`,
+  },
+
+  // Histogram of one sample.
+  histogram: {
+    title: (outcome: string) => `Distribution of ${outcome}`,
+    nullLabel: (value: string) => `μ₀ = ${value}`,
+    summary: (outcome: string, n: number, median: string) => `Histogram of ${outcome}, n = ${n}, median ${median}.`,
+    estimate: (name: string, value: string, interval: string) =>
+      `The ${name} ${value} and its ${interval} are drawn as a diamond with a bar at the top.`,
+    nullValue: (value: string) => `A dashed line marks the null value ${value}.`,
+  },
+
+  // Normal Q–Q plot of one sample.
+  qq: {
+    axis: 'Normal quantile',
+    title: (outcome: string) => `Normal Q–Q plot of ${outcome}`,
+    description: (outcome: string, n: number, intercept: string, slope: string) =>
+      `Normal Q–Q plot of ${outcome}, n = ${n}: each sorted value against the standard normal quantile at its plotting position. ` +
+      `The dashed line passes through the quartiles (intercept ${intercept}, slope ${slope} per standard deviation); ` +
+      'normal data fall near it, bends at the ends indicate heavier or lighter tails, and a curve indicates skew.',
+  },
+
+  // Two panels of a paired design: the pairs, then their differences.
+  paired: {
+    title: (first: string, second: string) => `${first} and ${second}, paired`,
+    meanDifference: 'mean difference',
+    measurement: 'Measurement',
+    difference: 'difference',
+    differenceAxis: (label: string | undefined) => (label ? `Difference (${label})` : 'Difference'),
+    estimate: (name: string, value: string, interval: string) => `The ${name} is ${value} (${interval}), marked by a diamond with a bar.`,
+    description: (first: string, second: string, n: number, boxes: boolean, difference: string, median: string, reference: string, estimate: string | undefined) =>
+      `Two panels. Left: ${first} and ${second} for each of ${n} pairs, one line per pair${boxes ? ', with box plots' : ''}. ` +
+      `Right: the ${n} differences (${difference}), median ${median}, against a dashed line at ${reference}.${estimate ? ` ${estimate}` : ''}`,
+  },
+
+  // Bar charts of categorical blocks.
+  counts: {
+    proportion: (successes: number, trials: number, percent: string, level: string, lower: string, upper: string) =>
+      `${successes} of ${trials} (${percent}, two-sided ${level} Wilson CI ${lower} to ${upper})`,
+    proportionAxis: (success: string) => `Proportion ${success}`,
+    proportionTitle: (success: string, by: string) => `Proportion ${success} by ${by}`,
+    groupProportions: (outcome: string, success: string, by: string, parts: readonly string[]) =>
+      `Bar chart of the proportion of ${outcome} = ${success} by ${by}, each bar with its Wilson interval: ${parts.join('; ')}.`,
+    contingency: (outcome: string, by: string, parts: readonly string[]) =>
+      `Grouped bar chart of counts of ${outcome} by ${by}: ${parts.join('; ')}.`,
+    subjects: 'Subjects',
+    paired: (first: string, second: string, parts: readonly string[]) =>
+      `Grouped bar chart of the subjects by ${first} (groups) and ${second} (bars); the discordant bars are the pairs that changed: ${parts.join('; ')}.`,
+    observed: 'observed',
+    expected: 'expected',
+    fitPart: (level: string, count: number, expected: string | undefined) =>
+      `${level} ${count}${expected === undefined ? '' : ` (expected ${expected})`}`,
+    fitTitle: (outcome: string) => `Observed and expected counts of ${outcome}`,
+    fit: (outcome: string, parts: readonly string[]) =>
+      `Grouped bar chart of the observed counts of ${outcome} beside the counts expected under the null hypothesis: ${parts.join('; ')}.`,
+    oneProportion: (outcome: string, success: string, proportion: string, nullValue: string | undefined) =>
+      `Bar chart of the proportion of ${outcome} = ${success}: ${proportion}` +
+      `${nullValue === undefined ? '' : `; a dashed line marks the null proportion ${nullValue}`}.`,
+  },
+
+  // Forest plot of a family's estimates.
+  family: {
+    axis: 'Estimate',
+    title: (name: string) => `Family ${name}: estimates with their intervals`,
+    description: (count: number, name: string, levels: readonly string[], ratios: boolean, parts: readonly string[]) =>
+      `Forest plot of the ${count} estimates of family ${name}, each with its ${levels.join(' or ')} confidence interval ` +
+      `(intervals not adjusted for the family), against a dashed line at ${ratios ? 'one' : 'zero'}: ${parts.join('; ')}.`,
+  },
+
+  // A `chart:` kind that does not fit the block (UserError chart-not-applicable).
+  choice: {
+    notFitting: (kind: string, block: string) => `\`chart: ${kind}\` does not fit ${block}`,
+    fitting: (kinds: readonly string[]) => `Charts that fit this block: ${kinds.map((k) => `\`${k}\``).join(', ')}.`,
+    block: (method: string) => (method === 'describe' ? 'a describe block' : `a \`${method}\` block`),
+    groups: (block: string) => `${block}: it compares groups of a numeric outcome`,
+    paired: (block: string) => `${block}: it compares two paired measurements`,
+    oneSample: (block: string) => `${block}: it has one numeric sample`,
+    samples: (block: string, count: number) => `${block} with ${count} groups`,
+    pair: (block: string) => `${block}: it relates two numeric columns`,
+    predictors: (block: string, count: number) => `${block} with ${count} predictors (no single x axis)`,
+    categorical: (block: string) => `${block}: its outcome is categorical (counts)`,
+  },
+} as const;

@@ -1,9 +1,10 @@
+import {readFileSync} from 'node:fs';
 import {describe, expect, it} from 'vitest';
 import type {MethodNote} from '../../src/methods/types.js';
 import {numberFormat} from '../../src/interpret/format-number.js';
 import {numberStyles} from '../../src/interpret/number-style.js';
 import {plainText} from '../../src/interpret/symbol-marks.js';
-import {methodNote, wording} from '../../src/interpret/wording.js';
+import {chartWords, methodNote, wording} from '../../src/interpret/wording.js';
 
 const notes: MethodNote[] = [
   {kind: 'spread-ratio', larger: 'b', smaller: 'a', ratio: 10, alternative: 'welch-anova'},
@@ -46,5 +47,35 @@ describe('methodNote', () => {
 describe('auto reasons', () => {
   it('word the number of groups', () => {
     expect(wording.autoReason({design: 'k-groups', groups: 4})).toMatch(/^a numeric outcome in 4 independent groups/);
+  });
+});
+
+describe('chartWords', () => {
+  // The source text of every entry, comments left out: a sample call would
+  // read one branch of each conditional, the source reads them all.
+  const source = readFileSync(new URL('../../src/interpret/wording.ts', import.meta.url), 'utf8');
+  const entries = source
+    .slice(source.indexOf('export const chartWords'))
+    .replace(/\/\*\*[\s\S]*?\*\//g, '')
+    .replace(/^\s*\/\/.*$/gm, '');
+
+  it('use none of the phrasings contract §7 forbids', () => {
+    // The slice holds the entries (a missing marker would leave nothing to read).
+    expect(entries).toContain('`Scatter plot of ${y} against ${x}, ${n} points`');
+    expect(chartWords.scatter.head('y', 'x', 3)).toBe('Scatter plot of y against x, 3 points');
+    const forbidden: readonly RegExp[] = [
+      /\baccept(s|ed|ing)?\b/i,
+      /\bprov(e|es|ed|en|ing)\b/i,
+      /\bno difference\b/i,
+      /\bthe same\b/i,
+      /probability (that )?the null/i,
+      /due to chance/i,
+      /marginally significant/i,
+      /trend(ing)? towards? (statistical )?significance/i,
+      /p = 0?\.000\b/,
+      /observed power/i,
+      /\b(are|is|were|was) equal\b/,
+    ];
+    for (const pattern of forbidden) expect(entries).not.toMatch(pattern);
   });
 });
