@@ -525,7 +525,7 @@ export const chartWords = {
 
   // Two panels of a paired design: the pairs, then their differences.
   paired: {
-    title: (first: string, second: string) => `${first} and ${second}, paired`,
+    title: (first: string, second: string) => `${capitalize(first)} and ${second}, paired`,
     meanDifference: 'mean difference',
     measurement: 'Measurement',
     difference: 'difference',
