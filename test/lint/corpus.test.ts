@@ -1,6 +1,7 @@
 import {describe, expect, it} from 'vitest';
 import {lintSentences} from '../../src/lint/lint-report.js';
 import {sentencesOfText} from '../../src/lint/prose-sentences.js';
+import {blindBatch} from './corpus-blind.js';
 import {corpus, heldOut, thirdBatch, type CorpusSentence} from './corpus.js';
 import {corpusContext} from './corpus-report.js';
 
@@ -11,11 +12,13 @@ describe('lint corpus: precision and recall', async () => {
     const tuned = score(corpus);
     const held = score(heldOut);
     const third = score(thirdBatch);
-    const all = score([...corpus, ...heldOut, ...thirdBatch]);
-    const total = corpus.length + heldOut.length + thirdBatch.length;
+    const blind = score(blindBatch);
+    const all = score([...corpus, ...heldOut, ...thirdBatch, ...blindBatch]);
+    const total = corpus.length + heldOut.length + thirdBatch.length + blindBatch.length;
     console.log([
       `lint corpus: ${total} sentences, ${all.planted} planted findings; precision ${all.precision.toFixed(3)}, recall ${all.recall.toFixed(3)}`,
       `  first batch (${corpus.length}): precision ${tuned.precision.toFixed(3)}, recall ${tuned.recall.toFixed(3)}; second batch (${heldOut.length}): precision ${held.precision.toFixed(3)}, recall ${held.recall.toFixed(3)}; third batch (${thirdBatch.length}): precision ${third.precision.toFixed(3)}, recall ${third.recall.toFixed(3)}`,
+      `  fourth batch (${blindBatch.length}): precision ${blind.precision.toFixed(3)}, recall ${blind.recall.toFixed(3)} (${blind.planted} planted)`,
       ...all.misses.map((miss) => `  ${miss}`),
     ].join('\n'));
     expect(total).toBeGreaterThanOrEqual(60);
