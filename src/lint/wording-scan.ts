@@ -54,3 +54,19 @@ export function hits(text: string, pattern: RegExp, caseSensitive = false): Hit[
 export function affirmedHits(text: string, pattern: RegExp, words = 8): Hit[] {
   return hits(text, pattern).filter((hit) => !isNegated(text, hit.start, words));
 }
+
+/** Words that make the rest of their clause a supposition, not a claim. */
+const supposition = /\b(?:if|unless|whether|suppose|supposing|assuming|assume)\b|\bunder\s+(?:the\s+)?(?:null|H0|H₀)/i;
+
+/** Whether the phrase at `index` sits in a conditional clause ("if the null hypothesis holds"). */
+export function isSupposed(text: string, index: number): boolean {
+  return supposition.test(text.slice(clauseStart(text, index), index));
+}
+
+/** What follows a phrase to deny it: "a highly significant p-value says nothing about size". */
+const denial = /^[^.;,]{0,40}?\b(?:(?:says?|tells?|means?|shows?|implies|indicates?)\s+nothing|(?:does|do|did)\s*(?:not|n['’]t)\s+(?:mean|measure|show|indicate|imply|tell|make|prove)|is\s+not\s+(?:a|an|the)\s+(?:measure|sign|proof))\b/i;
+
+/** Whether the clause after `end` denies the phrase before it. */
+export function isDeniedAfter(text: string, end: number): boolean {
+  return denial.test(text.slice(end));
+}

@@ -3,8 +3,10 @@ import {blocksAt} from '../cited-blocks.js';
 import type {LintRule, ProseSentence, SentenceFinding} from '../types.js';
 import {clauseEnd, clauseStart, hits, isNegated} from '../wording-scan.js';
 
-const up = /\b(?:higher|greater|larger|bigger|stronger|more|increased?|increases|increasing|rose|rise|rises|gained)\b/gi;
-const down = /\b(?:lower|smaller|weaker|less|fewer|decreased?|decreases|decreasing|fell|falls|dropped|declined?)\b/gi;
+const up = /\b(?:higher|greater|larger|bigger|stronger|more|increased?|increases|increasing|rose|rise|rises|gained|above|exceed(?:s|ed|ing)?)\b/gi;
+const down = /\b(?:lower|smaller|weaker|less|fewer|decreased?|decreases|decreasing|fell|falls|dropped|declined?|below)\b/gi;
+/** Words that take the other group straight after them: "South was below North", "North's times exceeded South's". */
+const direct = /^(?:above|below|exceed(?:s|ed|ing)?)$/i;
 /** Quantity words that may count something other than the outcome. */
 const quantityWords = /^(?:more|less|fewer)$/i;
 /** Sentences about spread compare SDs, not the estimate. */
@@ -12,8 +14,8 @@ const spreadWords = /\b(?:variab\w*|spread|SDs?|standard deviations?|variances?|
 
 /**
  * A direction word that disagrees with the sign of the cited estimate. Only
- * comparisons that name both groups are read, in two shapes: "B … higher …
- * than … A" and "rose from A to B"; the estimate's name says which way it
+ * comparisons that name both groups are read, in three shapes: "B … higher …
+ * than … A", "B … above (or exceeded) … A" and "rose from A to B"; the estimate's name says which way it
  * subtracts (`difference in means (B - A)`).
  */
 export const contradictsDirection: LintRule = {
@@ -64,6 +66,11 @@ function comparedGroups(block: InterpretedBlock): {names: [string, string]; valu
  */
 function claimedOrder(text: string, start: number, end: number, names: readonly [string, string]): [string, string] | undefined {
   const from = clauseStart(text, start);
+  if (direct.test(text.slice(start, end))) {
+    const later = firstNamed(text.slice(end, Math.min(clauseEnd(text, end + 1), end + 40)), names);
+    const earlier = later && lastNamed(text.slice(from, start), names.filter((name) => name !== later));
+    return later && earlier ? [earlier, later] : undefined;
+  }
   const than = /\bthan\b/i.exec(text.slice(end));
   if (than && !/[;,]/.test(text.slice(end, end + than.index))) {
     const thanAt = end + than.index + than[0].length;

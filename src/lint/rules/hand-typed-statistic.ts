@@ -22,7 +22,14 @@ const shapes: readonly Shape[] = [
   {
     kind: 'p',
     what: 'p-value',
-    pattern: new RegExp(String.raw`(?<![\w.])[pP](?:[- ]?values?)?\s*(?:(${relation})|\b(?:was|were|is|of)\s+(?:(?:just\s+|well\s+)?(?:above|below|under|over|less than|greater than|smaller than|larger than)\s+)?)\s*(${number})`),
+    pattern: new RegExp(String.raw`(?<![\w.])[pP](?:[- ]?values?)?\s*(?:(${relation})|\b(?:was|were|is|of|equals|equalled|came to|stood at|reached)\s+(?:(?:just\s+|well\s+)?(?:above|below|under|over|less than|greater than|smaller than|larger than)\s+)?(?:about\s+|around\s+|roughly\s+)?|(?<=[Vv]alues?\s*)[:(]?)\s*(${number})`),
+    accept: (match) => withinOne(match[2]),
+  },
+  {
+    // "a significance of 0.003" reports a p-value; "at a significance (level) of 0.05" is alpha.
+    kind: 'p',
+    what: 'p-value',
+    pattern: new RegExp(String.raw`(?<!\bat\s+(?:a\s+|the\s+)?(?:statistical\s+)?)\b(?:[Ss]ignificance|[Ss]ig\.)\s+(?:of|was|is|=|:)\s*()(${number})`),
     accept: (match) => withinOne(match[2]),
   },
   {
@@ -40,7 +47,8 @@ const shapes: readonly Shape[] = [
   {
     kind: 'effect',
     what: 'effect size',
-    pattern: new RegExp(String.raw`\b(?:Cohen['’]s d|Hedges['’]s? g|[Ee]ffect size|[Cc]orrelation(?: coefficient)?|Pearson['’]s r|Spearman['’]s rho)\s+(?:of|was|is|=)\s+(?:about\s+)?()()(${number})`),
+    // "the correlation between A and B was −0.41", "odds ratio 2.4".
+    pattern: new RegExp(String.raw`\b(?:Cohen['’]s d|Hedges['’]s? g|[Ee]ffect size|[Cc]orrelation(?: coefficient)?|Pearson['’]s r|Spearman['’]s rho|(?:[Oo]dds|[Rr]isk|[Hh]azard|[Rr]ate) ratio)(?:\s+(?:between|of|for)\s+[^.;,()=<>]{1,40}?)?(?:\s*[:=]\s*|\s+(?:(?:of|was|were|is|equals|equalled|came to|reached)\s+)?)(?:about\s+|around\s+|roughly\s+)?()()(${number})`),
     accept: (match) => hasDecimal(match[3]),
   },
   {

@@ -1,14 +1,21 @@
 import {significanceClaims} from '../significance-claims.js';
 import type {LintContext, LintRule, ProseSentence} from '../types.js';
-import {affirmedHits, hits} from '../wording-scan.js';
+import {affirmedHits, hits, isNegated, isSupposed} from '../wording-scan.js';
 
 /** Claims that groups are equal, or that there is nothing there. */
 const equality: readonly RegExp[] = [
-  /\bno\s+(?:real\s+|actual\s+|true\s+|meaningful\s+)?(?:difference|effect|association|relationship|correlation|link|change)s?\b(?!\s+(?:was|were)\s+(?:detected|found))/,
+  // Not the null hypothesis itself: "the null hypothesis of no difference was not rejected".
+  /(?<!\b(?:hypothes[ie]s|null|H0|H₀)\s+(?:of|that\s+there\s+(?:is|was|are|were))\s+)\bno\s+(?:real\s+|actual\s+|true\s+|meaningful\s+)?(?:difference|effect|association|relationship|correlation|link|change)s?\b(?!\s+(?:was|were)\s+(?:detected|found))/,
   /\b(?:is|are|was|were|be|stay(?:s|ed)?|remain(?:s|ed)?|seem(?:s|ed)?|appear(?:s|ed)?|look(?:s|ed)?)\s+(?:therefore\s+|thus\s+|essentially\s+|practically\s+|basically\s+|effectively\s+|just\s+|really\s+)?(?:the\s+same|equal|equivalent|identical|interchangeable|indistinguishable|comparable)\b(?!\s+(?:to\s+(?:the\s+)?(?:reported|stated|printed|shown)\s+precision|(?:to\s+)?within\b|up\s+to\s+rounding))/,
   /\b(?:performs?|performed|behaves?|behaved)\s+(?:equally|the\s+same|identically)\b/,
-  /\b(?:did|do|does)\s+not\s+differ\b(?!\s+(?:statistically\s+)?significantly)/,
+  /\b(?:give|gives|gave|produce[sd]?|yield(?:s|ed)?|ha(?:ve|s|d)|show(?:s|ed)?|result(?:s|ed)?\s+in)\s+(?:essentially\s+|practically\s+|basically\s+|effectively\s+|virtually\s+)?(?:identical|equivalent|equal|indistinguishable|the\s+same)\s+(?!(?:decision|conclusion|result|answer|verdict|outcome|p-values?)\b)\w+/,
+  /\b(?:is|are|was|were|be|been|seem(?:s|ed)?|appear(?:s|ed)?|perform(?:s|ed)?|behave[sd]?|work(?:s|ed)?|deliver(?:s|ed)?|do|did|does)\s+(?:\w+\s+)?equally\s+\w+/,
+  /\b(?:is|are|was|were|remain(?:s|ed)?|stay(?:s|ed)?|left|be|been)\s+(?:\w+\s+)?(?:unchanged|unaffected|unaltered)\b/,
+  // These carry their own negation ("did not differ", "did not change the readings").
+  /\b(?:did|do|does|has|have|had)\s*(?:not|n['’]t)\s+(?:differ|change[ds]?|affect(?:ed)?|alter(?:ed)?|influence[ds]?|shift(?:ed)?|impact(?:ed)?|move[ds]?)\b(?![^.;,]{0,40}?\b(?:statistically\s+)?significantly)/,
 ];
+/** Patterns of `equality` that hold their own "not": read for an outer negation only. */
+const ownNegation = new Set([equality.length - 1]);
 
 export const noDifferenceClaim: LintRule = {
   id: 'no-difference-claim',
@@ -17,8 +24,11 @@ export const noDifferenceClaim: LintRule = {
   suggestion: 'Write “no statistically significant difference was detected; this does not show that they are equal”, and cite `{{ID.sensitivity.min_detectable_effect_80}}`.',
   checkSentence(sentence, context) {
     if (!aboutNonSignificance(sentence, context)) return [];
-    // `didNotDiffer` carries its own negation; the others must be affirmed.
-    const found = equality.flatMap((pattern, i) => (i === 3 ? hits(sentence.masked, pattern) : affirmedHits(sentence.masked, pattern, 6)));
+    // An outer negation ("this does not show that the readings did not change") or a
+    // supposition ("if the pumps were equal …") makes the claim someone else's.
+    const found = equality
+      .flatMap((pattern, i) => (ownNegation.has(i) ? hits(sentence.masked, pattern).filter((hit) => !isNegated(sentence.masked, hit.start, 6)) : affirmedHits(sentence.masked, pattern, 6)))
+      .filter((hit) => !isSupposed(sentence.masked, hit.start));
     return found.map((hit) => ({
       start: hit.start,
       end: hit.end,

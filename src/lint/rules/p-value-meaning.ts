@@ -15,6 +15,10 @@ const patterns: readonly RegExp[] = [
   /\b\d+(?:\.\d+)?\s*%\s+(?:sure|certain|probability|chance)\s+that\s+[^.;]{0,40}?\b(?:real(?:ly)?|truly|true|genuine(?:ly)?|exists?)\b/,
   /\b(?:be|is|was|are|were|being)\s+(?:just\s+|only\s+|merely\s+|simply\s+)?(?:a\s+)?(?:random\s+|chance\s+|statistical\s+)?flukes?\b/,
   /\b(?:is|was|are|were|be|being)\s+(?:just\s+|only\s+|simply\s+|entirely\s+)?(?:due to|caused by|down to)\s+(?:random\s+|pure\s+|mere\s+)?chance\b/,
+  // "the likelihood that the drop happened randomly", "the possibility that the gap is a coincidence".
+  /\b(?:probability|chance|likelihood|odds|possibility)\s+(?:that|of)\s+(?:the\s+|this\s+|our\s+)?[\w\s-]{0,40}?\b(?:(?:is|was|are|were|be|being|arose|arises|arise|occurred|happened|came about|appeared)\s+(?:just\s+|only\s+|merely\s+|simply\s+)?(?:randomly|at random|by (?:accident|coincidence|luck)|(?:a|an)\s+(?:coincidence|fluke|accident of sampling))|(?:(?:is|was|are|were|being)\s+)?(?:due to|caused by|produced by|down to)\s+(?:random\s+|pure\s+|mere\s+)?(?:chance|luck|coincidence))\b/,
+  // "the null hypothesis has only a 0.1% probability of being correct".
+  /\b(?:null|alternative|H0|H₀|H1|H₁)(?:\s+hypothes[ie]s)?\s+(?:has|had|carries|stands)\s+(?:only\s+|just\s+|a\s+|an\s+)*(?:\d+(?:\.\d+)?\s*%\s+|small\s+|low\s+|high\s+|tiny\s+)?(?:probability|chance|likelihood|odds)\s+of\s+being\s+(?:true|false|correct|wrong|right)\b/,
   /\b\d+(?:\.\d+)?\s*%\s+(?:sure|certain|probability|chance|likely)\s+that\s+(?:the\s+|this\s+)?(?:\w+\s+)?(?:effect|difference|result|null|hypothesis|association)\b(?:\s+(?:is|was)\s+(?:real|true|genuine|due to (?:random\s+)?chance))?/,
 ];
 

@@ -1,9 +1,13 @@
 import type {LintRule, ProseSentence} from '../types.js';
 import {isNegated, hits} from '../wording-scan.js';
 
-const pattern = /\b(?:statistically\s+)?significant(?:ly)?\b[^.;]{0,50}?\b(?:so|therefore|thus|hence|which means|meaning|proving|showing|so that|and is|and so)\b[^.;]{0,50}?\b(?:it|this|that|they|the \w+)?\s*(?:matters?|important|meaningful|relevant|substantial|consequential|noteworthy|worth acting on|practically significant|clinically significant|large|major)\b/;
-/** "Because it is significant, it is large enough …": the same inference, cause first. */
-const because = /\b(?:because|since|as)\b[^.;]{0,40}?\b(?:statistically\s+)?significant\b[^.;,]{0,10},\s*[^.;]{0,30}?\b(?:matters?|important|meaningful|relevant|substantial|consequential|large enough|big enough|large|major)\b/;
+/** What the author concludes from significance alone: it matters, or it must be acted on. */
+const consequence = String.raw`(?:matters?|important|importance|meaningful|relevan(?:t|ce)|substantial|consequential|noteworthy|worth acting on|practically significant|clinically significant|large enough|big enough|large|major|(?:must|should|needs? to|ha(?:s|ve) to)\s+(?:be\s+)?(?:act(?:ed)?(?:\s+on)?|addressed|fixed|changed|replaced|respond|intervene)|act on|warrants?\s+(?:action|a change|attention)|calls? for (?:action|a change))`;
+const pattern = new RegExp(String.raw`\b(?:statistically\s+)?significant(?:ly)?\b[^.;]{0,50}?\b(?:so|therefore|thus|hence|which means|meaning|proving|showing|so that|and is|and so)\b[^.;]{0,50}?\b(?:it|this|that|they|the \w+)?\s*${consequence}\b`);
+/** "Because it is significant, it is large enough …", "Being significant, it is of practical importance": cause first. */
+const because = new RegExp(String.raw`\b(?:because|since|as|being|given that)\b[^.;]{0,40}?\b(?:statistically\s+)?significant\b[^.;,]{0,30},\s*[^.;]{0,60}?\b${consequence}\b`);
+/** A negation inside the inference ("because it is significant, it is not necessarily large") undoes it. */
+const denied = /\b(?:not|never|no|nothing|non-?\s?significant|insignificant)\b|n['’]t\b/i;
 /** Words and references that put the size of the effect beside the claim. */
 const sizeWords = /\b(?:effect size|Hedges|Cohen|interval|CI|smallest effect)\b|\b(?:by|of)\s+[−-]?\d/;
 
@@ -15,7 +19,7 @@ export const significanceAsImportance: LintRule = {
   checkSentence(sentence) {
     if (mentionsSize(sentence)) return [];
     return [...hits(sentence.masked, pattern), ...hits(sentence.masked, because)]
-      .filter((hit) => !isNegated(sentence.masked, hit.start, 4) && !/\bnon-$|\bin$/.test(sentence.masked.slice(Math.max(0, hit.start - 4), hit.start)))
+      .filter((hit) => !isNegated(sentence.masked, hit.start, 4) && !denied.test(hit.match[0]) && !/\bnon-$|\bin$/.test(sentence.masked.slice(Math.max(0, hit.start - 4), hit.start)))
       .map((hit) => ({
         start: hit.start,
         end: hit.end,
