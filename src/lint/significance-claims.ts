@@ -16,6 +16,9 @@ const significant = /\b(?:(?:statistically\s+)?significant(?:ly)?(?!\s+(?:portio
 
 const nearly = /(?:\b(?:marginally|almost|nearly|borderline|approaching|quasi-?|barely|weakly|suggestively|(?:close|near)\s+to(?:\s+being)?)\s+|\bnear-?)$/i;
 
+/** "Significant at the 10% level" swaps alpha after the fact; near-significance flags it. */
+const looserAlpha = /^\s+at\s+(?:the\s+|an?\s+)?(?:(?:10|ten)\s*(?:%|per\s?cent)|0?\.10?)\s+level\b/i;
+
 /**
  * Every claim a sentence makes about significance, in order. A negated
  * "significant" ("no statistically significant difference", "did not differ
@@ -27,7 +30,7 @@ export function significanceClaims(masked: string): ClaimHit[] {
   const positive = hits(masked, significant)
     .filter((hit) => !inside(hit.start) && !/non-$/.test(masked.slice(Math.max(0, hit.start - 4), hit.start)))
     // "Marginally significant" claims neither; near-significance flags it.
-    .filter((hit) => !nearly.test(masked.slice(Math.max(0, hit.start - 20), hit.start)))
+    .filter((hit) => !nearly.test(masked.slice(Math.max(0, hit.start - 20), hit.start)) && !looserAlpha.test(masked.slice(hit.end)))
     .map((hit) => ({
       start: hit.start,
       end: hit.end,

@@ -8,7 +8,7 @@
 const clauseBoundary = /[;:,()—–]|\b(?:but|so|therefore|thus|hence|whereas|while|although|though|because|and|yet)\b/gi;
 
 /** Words that negate what follows them in the same clause. */
-const negator = /\b(?:not|never|no|nor|neither|cannot|without|rather than|instead of|avoid|avoids|avoided|refrain from)\b|n['’]t\b/i;
+const negator = /\b(?:not|never|no|nor|neither|cannot|without|rather than|instead of|avoid|avoids|avoided|refrain from|(?:wrong|incorrect|mistaken|misleading|a mistake|an error)\s+to)\b|n['’]t\b/i;
 
 /** Offset where the clause holding `index` starts. */
 export function clauseStart(text: string, index: number): number {

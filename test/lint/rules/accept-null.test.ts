@@ -20,3 +20,17 @@ describe('accept-null', async () => {
     expect(check('Rather than accept the null, we report the interval.')).toEqual([]);
   });
 });
+
+describe('accept-null in other words', async () => {
+  const {check} = await ruleChecker('accept-null');
+  it('flags proofs of no effect, conclusions that H0 is true and a null that holds', () => {
+    expect(check('The records establish that rebalancing has no effect on wear.')).toEqual(['13:establish that rebalancing has no effect']);
+    expect(check('We conclude that H0 is true.')).toEqual(['4:conclude that H0 is true']);
+    expect(check('The null hypothesis of equal waits holds ({{early.p}}).')).toEqual(['5:null hypothesis of equal waits holds']);
+  });
+  it('leaves suppositions and negations', () => {
+    expect(check('If the null hypothesis holds, such readings are rare ({{drift.p}}).')).toEqual([]);
+    expect(check('We cannot conclude that H0 is true.')).toEqual([]);
+    expect(check('The client will accept the report.')).toEqual([]);
+  });
+});

@@ -44,3 +44,16 @@ describe('contradicts-decision with two blocks in one part', async () => {
     expect(check('The 7-day test ({{early.p}}) was significant, and the 28-day test ({{strength.p}}) was too.')).toEqual(['34:significant']);
   });
 });
+
+describe('contradicts-decision in other words', async () => {
+  const {check} = await ruleChecker('contradicts-decision');
+  it('reads a rejected or retained null hypothesis with its content', () => {
+    expect(check('The null hypothesis of equal early strength was rejected ({{early.p}}).')).toHaveLength(1);
+    expect(check('The null hypothesis of equal strength was retained ({{strength.p}}).')).toHaveLength(1);
+    expect(check('The null hypothesis of equal early strength was not rejected ({{early.p}}).')).toEqual([]);
+  });
+  it('leaves phrases that are near-significance, not claims', () => {
+    expect(check('Early strength was close to being significant ({{early.p}}).')).toEqual([]);
+    expect(check('It was significant at the 10% level ({{early.p}}).')).toEqual([]);
+  });
+});

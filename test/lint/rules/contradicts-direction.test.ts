@@ -31,3 +31,13 @@ describe('contradicts-direction', async () => {
     expect(check('North needed more minutes than South ({{delivery.estimate}}).')).toEqual(['14:more']);
   });
 });
+
+describe('contradicts-direction with above, below and exceeded', async () => {
+  const {check} = await ruleChecker('contradicts-direction');
+  it('reads the group right after the word', () => {
+    expect(check('The mean for South was below that of North ({{delivery.estimate}}).')).toEqual(['24:below']);
+    expect(check('North’s times exceeded South’s ({{delivery.estimate}}).')).toEqual(['15:exceeded']);
+    expect(check('South’s times exceeded North’s ({{delivery.estimate}}).')).toEqual([]);
+    expect(check('South’s times were above 40 minutes ({{delivery.estimate}}).')).toEqual([]);
+  });
+});

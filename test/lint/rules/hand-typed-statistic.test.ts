@@ -66,3 +66,17 @@ describe('hand-typed-statistic', async () => {
     expect(findings[1]!.place).toMatchObject({start: {line: 4, column: 15}, end: {line: 4, column: 22}});
   });
 });
+
+describe('hand-typed statistics in other words', async () => {
+  const {check} = await ruleChecker('hand-typed-statistic');
+  it('flags a bare p-value, a significance used as p, and named effect sizes', () => {
+    expect(check('Depth was greater (p-value 0.03).')).toEqual(['20:p-value 0.03']);
+    expect(check('The result had a significance of 0.003.')).toEqual(['18:significance of 0.003']);
+    expect(check('The correlation between depth and yield was −0.41.')).toEqual(['5:correlation between depth and yield was −0.41']);
+    expect(check('Line B failed more often, odds ratio 2.4.')).toEqual(['27:odds ratio 2.4']);
+  });
+  it('leaves alpha stated as a significance level', () => {
+    expect(check('Tests were run at a significance of 0.05.')).toEqual([]);
+    expect(check('We used a significance level of 0.05.')).toEqual([]);
+  });
+});

@@ -29,3 +29,22 @@ describe('no-difference-claim and rounding', async () => {
     expect(check('The readings were equal ({{drift.p}}).')).toEqual(['14:were equal']);
   });
 });
+
+describe('no-difference-claim in other words', async () => {
+  const {check} = await ruleChecker('no-difference-claim');
+  it('flags verbs that claim sameness or no change', () => {
+    expect(check('Not significant, so the two pastes gave identical failure rates.')).toEqual(['36:gave identical failure']);
+    expect(check('Rebalancing did not alter the vibration ({{drift.p}}).')).toEqual(['13:did not alter']);
+    expect(check('Both pumps are equally smooth ({{drift.p}}).')).toEqual(['12:are equally smooth']);
+    expect(check('Servicing kept the readings unchanged ({{drift.p}}).')).toEqual(['11:kept the readings unchanged']);
+    expect(check('Our measurements show that there is no change in root depth.')).toEqual(['18:show that there is no change']);
+  });
+  it('leaves the null hypothesis, suppositions, outer negations and assumed equal variances', () => {
+    expect(check('The null hypothesis of no difference was not rejected ({{early.p}}).')).toEqual([]);
+    expect(check('If the pumps were identical, readings this far apart would be common ({{drift.p}}).')).toEqual([]);
+    expect(check('This does not show that rebalancing did not change the vibration ({{drift.p}}).')).toEqual([]);
+    expect(check('It would be wrong to say the pumps are the same ({{drift.p}}).')).toEqual([]);
+    expect(check('The variances were equal, so the pooled test was used ({{early.p}}).')).toEqual([]);
+    expect(check('The pooled test gave the same decision ({{early.p}}).')).toEqual([]);
+  });
+});

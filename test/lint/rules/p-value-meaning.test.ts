@@ -18,3 +18,16 @@ describe('p-value-meaning', async () => {
     expect(check('We are 95% confident in the method.')).toEqual([]);
   });
 });
+
+describe('p-value-meaning in other words', async () => {
+  const {check} = await ruleChecker('p-value-meaning');
+  it('flags chance put in other words and a probability given to the null', () => {
+    expect(check('It is the likelihood that the drop happened randomly.')).toEqual(['11:likelihood that the drop happened randomly']);
+    expect(check('The p-value rules out the possibility that the gap is a coincidence.')).toEqual(['27:possibility that the gap is a coincidence']);
+    expect(check('The null hypothesis has a 2% probability of being true.')).toEqual(['5:null hypothesis has a 2% probability of being true']);
+  });
+  it('leaves chance that is not about the result', () => {
+    expect(check('The chance that a joint fails during handling is small.')).toEqual([]);
+    expect(check('If the null hypothesis were true, data this extreme would be rare ({{delivery.p}}).')).toEqual([]);
+  });
+});

@@ -16,3 +16,15 @@ describe('significance-as-importance', async () => {
     expect(check('It is not significant, so it is not important to act.')).toEqual([]);
   });
 });
+
+describe('significance-as-importance, cause first', async () => {
+  const {check} = await ruleChecker('significance-as-importance');
+  it('flags action or importance drawn from significance alone', () => {
+    expect(check('Since the delay is significant ({{delivery.p}}), the managers must act on it.')).toEqual(['1:Since the delay is significant ({{delivery.p}}), the managers must act on']);
+    expect(check('Being significant, the effect is of practical importance.')).toEqual(['1:Being significant, the effect is of practical importance']);
+  });
+  it('leaves inferences that are negated', () => {
+    expect(check('Because the delay is not significant, it is not important.')).toEqual([]);
+    expect(check('Because it is significant, it is not necessarily important.')).toEqual([]);
+  });
+});

@@ -15,3 +15,15 @@ describe('significance-as-size', async () => {
     expect(check('The delay was very large ({{delivery.estimate}}) and significant.')).toEqual([]);
   });
 });
+
+describe('significance-as-size from a small p-value', async () => {
+  const {check} = await ruleChecker('significance-as-size');
+  it('flags a large effect read off a small p-value', () => {
+    expect(check('Given how tiny the p-value is, the delay must be large.')).toEqual(['11:tiny the p-value is, the delay must be large']);
+    expect(check('The smaller the p-value, the larger the effect.')).toEqual(['1:The smaller the p-value, the larger']);
+  });
+  it('leaves sentences that deny the inference', () => {
+    expect(check('A small p-value does not mean the effect is large.')).toEqual([]);
+    expect(check('A highly significant p-value says nothing about size.')).toEqual([]);
+  });
+});
