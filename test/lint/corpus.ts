@@ -99,7 +99,8 @@ export const corpus: readonly CorpusSentence[] = [
   {text: 'Delivery times were lower for South than for North ({{delivery.estimate}}).', expect: ['contradicts-direction']},
   {text: 'Mean strength was higher in Quarrybank than in Northfield ({{strength.p}}).', expect: ['contradicts-direction']},
   {text: 'Readings decreased from before to after the service ({{drift.estimate}}).', expect: ['contradicts-direction']},
-  {text: 'North took longer than South on average ({{delivery}}).', expect: []},
+  // Labelled clean until "longer" was read as a direction word; it is wrong: South took longer.
+  {text: 'North took longer than South on average ({{delivery}}).', expect: ['contradicts-direction']},
   {text: 'Northfield’s cylinders were stronger than Quarrybank’s ({{strength.estimate}}).', expect: []},
   {text: 'South delivery times were higher than North’s ({{delivery.estimate}}).', expect: []},
   {text: 'Quarrybank’s strengths were less variable than Northfield’s ({{strength.groups.Quarrybank.sd}}).', expect: []},

@@ -14,6 +14,7 @@ const patterns: readonly RegExp[] = [
   /\b(?:prov(?:e|es|ed|en|ing)|demonstrat(?:e|es|ed|ing)|establish(?:es|ed|ing)?|confirm(?:s|ed|ing)?|verif(?:y|ies|ied))\s+that\s+[^.;]{0,50}?\b(?:has|have|had|makes?|made|exerts?|exerted)\s+no\s+(?:\w+\s+)?(?:effect|difference|influence|impact|association|relationship)\b/,
   // "we conclude that H0 is true", "the data show the null of equal means holds".
   /\b(?:conclud(?:e|es|ed|ing)|shows?|showed|shown|means?|meant|proves?|demonstrates?|confirms?|establish(?:es)?|indicates?|suggests?|know|find|found)\s+(?:that\s+)?(?:the\s+)?(?:null(?:\s+hypothes[ie]s)?|H0|H₀|H_0)(?:\s+of\s+[^.;,()]{1,40}?)?\s+(?:is|was|must be)\s+(?:true|correct|right|valid)\b/,
+  /\b(?:shows?|showed|shown|proves?|proved|proven|demonstrates?|demonstrated|confirms?|confirmed|finds?|found)\s+(?:the\s+)?(?:null(?:\s+hypothes[ie]s)?|H0|H₀|H_0)(?:\s+of\s+[^.;,()]{1,40}?)?\s+to\s+be\s+(?:true|correct|right|valid)\b/,
   // "the null hypothesis (of equal wait times) holds / stands / is true", outside a supposition.
   /\b(?:null(?:\s+hypothes[ie]s)?|H0|H₀|H_0)(?:\s+of\s+[^.;,()]{1,40}?)?\s+(?:holds|held|stands|stood|(?:is|was)\s+(?:therefore\s+|thus\s+)?(?:accepted|proven|proved|confirmed|verified|established))\b/,
 ];

@@ -3,8 +3,8 @@ import {blocksAt} from '../cited-blocks.js';
 import type {LintRule, ProseSentence, SentenceFinding} from '../types.js';
 import {clauseEnd, clauseStart, hits, isNegated} from '../wording-scan.js';
 
-const up = /\b(?:higher|greater|larger|bigger|stronger|more|increased?|increases|increasing|rose|rise|rises|gained|above|exceed(?:s|ed|ing)?)\b/gi;
-const down = /\b(?:lower|smaller|weaker|less|fewer|decreased?|decreases|decreasing|fell|falls|dropped|declined?|below)\b/gi;
+const up = /\b(?:higher|greater|larger|bigger|stronger|more|increased?|increases|increasing|rose|rise|rises|gained|above|exceed(?:s|ed|ing)?|longer|heavier|taller|wider|thicker|deeper|louder|hotter|warmer)\b/gi;
+const down = /\b(?:lower|smaller|weaker|less|fewer|decreased?|decreases|decreasing|fell|falls|dropped|declined?|below|shorter|lighter|narrower|thinner|shallower|quieter|cooler|colder)\b/gi;
 /** Words that take the other group straight after them: "South was below North", "North's times exceeded South's". */
 const direct = /^(?:above|below|exceed(?:s|ed|ing)?)$/i;
 /** Quantity words that may count something other than the outcome. */

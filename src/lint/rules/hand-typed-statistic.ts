@@ -3,7 +3,7 @@ import type {LintRule, SentenceFinding} from '../types.js';
 import {hits} from '../wording-scan.js';
 
 const number = String.raw`[−-]?(?:\d+(?:\.\d+)?|\.\d+)(?:e[−-]?\d+)?`;
-const relation = String.raw`(?:<=|>=|=|<|>|≤|≥)`;
+const relation = String.raw`(?:<=|>=|=|<|>|≤|≥|≈)`;
 /** A number followed by a unit is a measurement (`t = 2.5 h`), not a statistic. */
 const unitAfter = /^\s?(?:s|ms|h|hrs?|min|d|days?|hours?|weeks?|months?|years?|°C|K|mm|cm|m|km|kg|g|MPa|kN|N|%)(?![\w])/;
 
@@ -37,6 +37,13 @@ const shapes: readonly Shape[] = [
     what: 'test statistic',
     pattern: new RegExp(String.raw`(?<![\w.])(t|F|z|U|W|H|χ²|χ2|X²|chi2|chi²|chi-squared?)\s*(\([^()]{1,30}\))?\s*(${relation})\s*(${number})`),
     accept: (match) => /^(?:χ|X|chi)/.test(match[1]!) || match[2] !== undefined || hasDecimal(match[4]),
+  },
+  {
+    // "a t statistic of 2.31", "the chi-square value was 5.1".
+    kind: 'statistic',
+    what: 'test statistic',
+    pattern: new RegExp(String.raw`\b(?:(?:t|F|z|U|W|H)[- ](?:statistic|value|ratio|score)|[Cc]hi[- ]squared?(?:\s+(?:statistic|value))?|[Tt]est statistic)\s*(?:[:=]\s*|\s(?:of|was|is|equals|equalled|came to|reached)\s+)(?:about\s+|around\s+)?()()(${number})`),
+    accept: (match) => hasDecimal(match[3]),
   },
   {
     kind: 'effect',

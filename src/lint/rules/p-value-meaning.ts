@@ -14,7 +14,9 @@ const patterns: readonly RegExp[] = [
   /\b(?:probability|chance|likelihood|odds)\s+(?:that|of)\s+(?:the\s+|this\s+|our\s+)?[\w\s-]{0,30}?\b(?:arose|arises|arise|occurred|happened|came about|appeared)\s+(?:by|through|from)\s+(?:random\s+|pure\s+|mere\s+)?chance\b/,
   /\b\d+(?:\.\d+)?\s*%\s+(?:sure|certain|probability|chance)\s+that\s+[^.;]{0,40}?\b(?:real(?:ly)?|truly|true|genuine(?:ly)?|exists?)\b/,
   /\b(?:be|is|was|are|were|being)\s+(?:just\s+|only\s+|merely\s+|simply\s+)?(?:a\s+)?(?:random\s+|chance\s+|statistical\s+)?flukes?\b/,
-  /\b(?:is|was|are|were|be|being)\s+(?:just\s+|only\s+|simply\s+|entirely\s+)?(?:due to|caused by|down to)\s+(?:random\s+|pure\s+|mere\s+)?chance\b/,
+  /\b(?:is|was|are|were|be|being)\s+(?:probably\s+|likely\s+|clearly\s+)?(?:just\s+|only\s+|simply\s+|entirely\s+|merely\s+)?(?:due to|caused by|down to|explained by)\s+(?:random\s+|pure\s+|mere\s+)?chance(?:\s+alone)?\b/,
+  // "a 3% chance that we are wrong", "a 3% probability of being mistaken".
+  /\b\d+(?:\.\d+)?\s*%\s+(?:chance|probability|risk|likelihood)\s+(?:that\s+)?(?:we\s+are|we['’]re|(?:the|our)\s+\w+\s+(?:is|was)|of\s+being)\s+(?:wrong|mistaken|incorrect|in error|a false positive)\b/,
   // "the likelihood that the drop happened randomly", "the possibility that the gap is a coincidence".
   /\b(?:probability|chance|likelihood|odds|possibility)\s+(?:that|of)\s+(?:the\s+|this\s+|our\s+)?[\w\s-]{0,40}?\b(?:(?:is|was|are|were|be|being|arose|arises|arise|occurred|happened|came about|appeared)\s+(?:just\s+|only\s+|merely\s+|simply\s+)?(?:randomly|at random|by (?:accident|coincidence|luck)|(?:a|an)\s+(?:coincidence|fluke|accident of sampling))|(?:(?:is|was|are|were|being)\s+)?(?:due to|caused by|produced by|down to)\s+(?:random\s+|pure\s+|mere\s+)?(?:chance|luck|coincidence))\b/,
   // "the null hypothesis has only a 0.1% probability of being correct".

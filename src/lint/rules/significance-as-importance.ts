@@ -3,7 +3,7 @@ import {isNegated, hits} from '../wording-scan.js';
 
 /** What the author concludes from significance alone: it matters, or it must be acted on. */
 const consequence = String.raw`(?:matters?|important|importance|meaningful|relevan(?:t|ce)|substantial|consequential|noteworthy|worth acting on|practically significant|clinically significant|large enough|big enough|large|major|(?:must|should|needs? to|ha(?:s|ve) to)\s+(?:be\s+)?(?:act(?:ed)?(?:\s+on)?|addressed|fixed|changed|replaced|respond|intervene)|act on|warrants?\s+(?:action|a change|attention)|calls? for (?:action|a change))`;
-const pattern = new RegExp(String.raw`\b(?:statistically\s+)?significant(?:ly)?\b[^.;]{0,50}?\b(?:so|therefore|thus|hence|which means|meaning|proving|showing|so that|and is|and so)\b[^.;]{0,50}?\b(?:it|this|that|they|the \w+)?\s*${consequence}\b`);
+const pattern = new RegExp(String.raw`\b(?:statistically\s+)?significant(?:ly)?\b[^.;]{0,50}?\b(?:so|therefore|thus|hence|which means|meaning|means|proving|proves|showing|shows|demonstrat(?:es|ing)|indicat(?:es|ing)|confirm(?:s|ing)|so that|and is|and so|making it|makes it)\b[^.;]{0,50}?\b(?:it|this|that|they|the \w+)?\s*${consequence}\b`);
 /** "Because it is significant, it is large enough …", "Being significant, it is of practical importance": cause first. */
 const because = new RegExp(String.raw`\b(?:because|since|as|being|given that)\b[^.;]{0,40}?\b(?:statistically\s+)?significant\b[^.;,]{0,30},\s*[^.;]{0,60}?\b${consequence}\b`);
 /** A negation inside the inference ("because it is significant, it is not necessarily large") undoes it. */

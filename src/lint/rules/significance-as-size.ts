@@ -4,7 +4,7 @@ import {affirmedHits, isDeniedAfter} from '../wording-scan.js';
 const pattern = /\b(?:(?:very\s+)?highly|very|extremely|hugely|strongly|vastly|massively|overwhelmingly)\s+(?:statistically\s+)?significant(?:ly)?\b|\b(?:more|less)\s+(?:statistically\s+)?significant\s+than\b/;
 
 /** A small p-value read as a large effect: "given how tiny the p-value is, the delay must be large". */
-const smallP = /\b(?:small|tiny|low|minuscule|minute)(?:\s+the)?\s+(?:p|P)[- ]?values?\b[^.;]{0,60}?\b(?:large|big|huge|strong|substantial|sizeable|sizable|considerable|massive)\b|\bthe\s+(?:smaller|lower|tinier)\s+the\s+p[- ]?values?,?\s+the\s+(?:larger|bigger|stronger|greater)\b/;
+const smallP = /\b(?:small|tiny|low|minuscule|minute)(?:\s+the)?\s+(?:p|P)[- ]?values?\b[^.;]{0,60}?\b(?:large|big|huge|strong|substantial|sizeable|sizable|considerable|massive)\b|\bthe\s+(?:smaller|lower|tinier)\s+the\s+p[- ]?values?,?\s+the\s+(?:larger|bigger|stronger|greater)\b|\b(?:p|P)[- ]?values?\s+(?:is|was|were|are)\s+(?:so\s+|very\s+|extremely\s+)?(?:small|tiny|low|minuscule)\b[^.;]{0,60}?\b(?:large|big|huge|strong|substantial|sizeable|sizable|considerable|massive)\b|\bsignificance\s+(?:is|was)\s+(?:very\s+)?(?:strong|huge|enormous|overwhelming|massive)\b/;
 /** A negation inside the span ("a small p-value does not mean a large effect") reverses it. */
 const negation = /\b(?:not|never|no|nothing|neither)\b|n['’]t\b/i;
 

@@ -34,3 +34,11 @@ describe('accept-null in other words', async () => {
     expect(check('The client will accept the report.')).toEqual([]);
   });
 });
+
+describe('accept-null: shown to be true', async () => {
+  const {check} = await ruleChecker('accept-null');
+  it('flags a null shown to be true', () => {
+    expect(check('The results show the null hypothesis to be true.')).toHaveLength(1);
+    expect(check('The results do not show the null hypothesis to be true.')).toEqual([]);
+  });
+});

@@ -57,3 +57,13 @@ describe('contradicts-decision in other words', async () => {
     expect(check('It was significant at the 10% level ({{early.p}}).')).toEqual([]);
   });
 });
+
+describe('contradicts-decision with alpha and evidence', async () => {
+  const {check} = await ruleChecker('contradicts-decision');
+  it('reads p against alpha and "no evidence of" as claims', () => {
+    expect(check('The p-value was below alpha ({{early.p}}).')).toHaveLength(1);
+    expect(check('We found no evidence of a difference ({{strength.p}}).')).toHaveLength(1);
+    expect(check('We found no evidence of a difference ({{early.p}}).')).toEqual([]);
+    expect(check('Wait times were slightly significant ({{early.p}}).')).toEqual([]);
+  });
+});

@@ -41,3 +41,11 @@ describe('contradicts-direction with above, below and exceeded', async () => {
     expect(check('South’s times were above 40 minutes ({{delivery.estimate}}).')).toEqual([]);
   });
 });
+
+describe('contradicts-direction with size adjectives', async () => {
+  const {check} = await ruleChecker('contradicts-direction');
+  it('reads longer and shorter', () => {
+    expect(check('North took longer than South ({{delivery.estimate}}).')).toEqual(['12:longer']);
+    expect(check('North’s trips were shorter than South’s ({{delivery.estimate}}).')).toEqual([]);
+  });
+});

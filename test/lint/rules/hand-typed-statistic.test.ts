@@ -80,3 +80,16 @@ describe('hand-typed statistics in other words', async () => {
     expect(check('We used a significance level of 0.05.')).toEqual([]);
   });
 });
+
+describe('test statistics named in words', async () => {
+  const {check} = await ruleChecker('hand-typed-statistic');
+  it('flags them, and ≈ as a relation', () => {
+    expect(check('The t statistic of 2.31 was computed by hand.')).toEqual(['5:t statistic of 2.31']);
+    expect(check('The chi-square value was 5.12.')).toEqual(['5:chi-square value was 5.12']);
+    expect(check('They were related (r ≈ 0.44).')).toEqual(['20:r ≈ 0.44']);
+  });
+  it('leaves mentions without a value', () => {
+    expect(check('The chi-square test was chosen because counts were large.')).toEqual([]);
+    expect(check('The ratio of 2.5 to 1 was used for mixing.')).toEqual([]);
+  });
+});

@@ -33,3 +33,12 @@ describe('near-significance in other words', async () => {
     expect(check('The test was not statistically significant, and we say no more ({{early.p}}).')).toEqual([]);
   });
 });
+
+describe('near-significance: tendencies and edges', async () => {
+  const {check} = await ruleChecker('near-significance');
+  it('flags them', () => {
+    expect(check('The effect tended toward significance.')).toHaveLength(1);
+    expect(check('Failures were on the cusp of significance.')).toHaveLength(1);
+    expect(check('Wait times were slightly significant.')).toHaveLength(1);
+  });
+});

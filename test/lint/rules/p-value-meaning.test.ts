@@ -31,3 +31,12 @@ describe('p-value-meaning in other words', async () => {
     expect(check('If the null hypothesis were true, data this extreme would be rare ({{delivery.p}}).')).toEqual([]);
   });
 });
+
+describe('p-value-meaning: the chance of being wrong', async () => {
+  const {check} = await ruleChecker('p-value-meaning');
+  it('flags a percentage chance that the conclusion is wrong', () => {
+    expect(check('There is a 4% chance that we are wrong about the clinics.')).toHaveLength(1);
+    expect(check('The difference is probably due to chance ({{early.p}}).')).toHaveLength(1);
+    expect(check('Alpha is the chance of rejecting a true null hypothesis.')).toEqual([]);
+  });
+});

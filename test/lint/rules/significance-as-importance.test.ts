@@ -28,3 +28,11 @@ describe('significance-as-importance, cause first', async () => {
     expect(check('Because it is significant, it is not necessarily important.')).toEqual([]);
   });
 });
+
+describe('significance-as-importance: shows that it matters', async () => {
+  const {check} = await ruleChecker('significance-as-importance');
+  it('flags a significant result said to show importance', () => {
+    expect(check('The significant result shows that the delay is important.')).toHaveLength(1);
+    expect(check('The significant result shows that the delay is real, not that it is important.')).toEqual([]);
+  });
+});

@@ -27,3 +27,12 @@ describe('significance-as-size from a small p-value', async () => {
     expect(check('A highly significant p-value says nothing about size.')).toEqual([]);
   });
 });
+
+describe('significance-as-size: p so small', async () => {
+  const {check} = await ruleChecker('significance-as-size');
+  it('flags a size read from how small p is, or how strong significance is', () => {
+    expect(check('The p-value was so small that the effect must be big.')).toHaveLength(1);
+    expect(check('The significance was overwhelming.')).toHaveLength(1);
+    expect(check('The client knows the p-value is small, but the effect is not large.')).toEqual([]);
+  });
+});
