@@ -68,16 +68,10 @@ function lowerChain(s: number, x: number, y: number, b: number, lambda: number):
   let j = Math.max(0, Math.ceil(lambda - s + 10 * Math.sqrt(lambda) + 40));
   // T(a) decreases for a above its peak (x b - 1)/y; lower the start to the
   // largest index where it is still representable.
-  if (betaTerm(s + j + 0.5, b, x, y) < TINY) {
-    let ok = Math.max(0, Math.floor((x * b - 1) / y - s));
-    if (betaTerm(s + ok + 0.5, b, x, y) >= TINY) {
-      while (j - ok > 1) {
-        const mid = Math.floor((j + ok) / 2);
-        if (betaTerm(s + mid + 0.5, b, x, y) >= TINY) ok = mid;
-        else j = mid;
-      }
-      j = ok;
-    }
+  const representable = (m: number) => betaTerm(s + m + 0.5, b, x, y) >= TINY;
+  if (!representable(j)) {
+    const peak = Math.max(0, Math.floor((x * b - 1) / y - s));
+    if (representable(peak)) j = edgeOf(peak, j, representable);
   }
   let a = s + j + 0.5;
   const w = new SteppedTerm(poissonTerm(s + j, lambda));
@@ -105,15 +99,8 @@ function upperChain(s: number, x: number, y: number, b: number, lambda: number):
   let j = Math.max(0, Math.floor(lambda - s - 10 * Math.sqrt(lambda) - 10));
   const mode = Math.max(j, Math.floor(lambda - s));
   // Below its peak T(a) increases; move the start up to where it is representable.
-  if (betaTerm(s + j + 0.5, b, x, y) < TINY && betaTerm(s + mode + 0.5, b, x, y) >= TINY) {
-    let ok = mode;
-    while (ok - j > 1) {
-      const mid = Math.floor((j + ok) / 2);
-      if (betaTerm(s + mid + 0.5, b, x, y) >= TINY) ok = mid;
-      else j = mid;
-    }
-    j = ok;
-  }
+  const representable = (m: number) => betaTerm(s + m + 0.5, b, x, y) >= TINY;
+  if (!representable(j) && representable(mode)) j = edgeOf(mode, j, representable);
   let a = s + j + 0.5;
   const w = new SteppedTerm(poissonTerm(s + j, lambda));
   const term = new SteppedTerm(betaTerm(a, b, x, y));
@@ -148,4 +135,18 @@ export function noncentralTSeries(t: number, df: number, ncp: number, upper: boo
   const lambda = (ncp * ncp) / 2;
   if (upper) return (upperChain(0, x, y, b, lambda) + upperChain(0.5, x, y, b, lambda)) / 2;
   return normalCdf(-ncp) + (lowerChain(0, x, y, b, lambda) + lowerChain(0.5, x, y, b, lambda)) / 2;
+}
+
+/**
+ * Bisection between an index whose beta term is representable (`good`) and
+ * one whose term underflows (`bad`): the representable index next to the
+ * edge. T(a) is monotone between them, so the edge is unique.
+ */
+function edgeOf(good: number, bad: number, representable: (index: number) => boolean): number {
+  while (Math.abs(bad - good) > 1) {
+    const mid = Math.floor((good + bad) / 2);
+    if (representable(mid)) good = mid;
+    else bad = mid;
+  }
+  return good;
 }

@@ -1,8 +1,5 @@
 import {pooledSd} from './shared/pooled-sd.js';
-import {summarize} from './shared/summarize.js';
-import {tInference} from './shared/t-inference.js';
-import {tSensitivity} from './shared/t-sensitivity.js';
-import {pooledHedgesG} from './shared/two-group-t.js';
+import {twoGroupTOutcome} from './shared/two-group-t.js';
 import type {MethodDefinition, TwoGroupDesign} from './types.js';
 
 /**
@@ -15,38 +12,10 @@ export const studentT: MethodDefinition<TwoGroupDesign> = {
   id: 'student-t',
   title: 'Student’s t test',
   design: 'two-group',
-  compute({first, second}, options) {
-    const a = summarize(first.values);
-    const b = summarize(second.values);
-    const df = a.n + b.n - 2;
-    const sp = pooledSd(a, b);
-    const scale = Math.sqrt(1 / a.n + 1 / b.n);
-    const inference = tInference({
-      estimate: b.mean - a.mean,
-      se: sp * scale,
-      df,
-      nullValue: 0,
-      alternative: options.alternative,
-      confidence: options.confidence,
-    });
-    return {
-      statistic: {name: 't', value: inference.t},
-      df,
-      p: inference.p,
-      estimate: {
-        name: `difference in means (${second.label} - ${first.label})`,
-        value: b.mean - a.mean,
-        ci: inference.ci,
-        level: options.confidence,
-      },
-      effect: pooledHedgesG(a, b, options.alternative, options.confidence),
-      sensitivity: tSensitivity({
-        ncpPerUnit: 1 / (sp * scale),
-        df,
-        alpha: options.alpha,
-        alternative: options.alternative,
-        smallestEffect: options.smallestEffect,
-      }),
-    };
+  compute(design, options) {
+    return twoGroupTOutcome(design, options, (a, b) => ({
+      se: pooledSd(a, b) * Math.sqrt(1 / a.n + 1 / b.n),
+      df: a.n + b.n - 2,
+    }));
   },
 };

@@ -1,7 +1,4 @@
-import {summarize} from './shared/summarize.js';
-import {tInference} from './shared/t-inference.js';
-import {tSensitivity} from './shared/t-sensitivity.js';
-import {pooledHedgesG, welchStandardError} from './shared/two-group-t.js';
+import {twoGroupTOutcome, welchStandardError} from './shared/two-group-t.js';
 import type {MethodDefinition, TwoGroupDesign} from './types.js';
 
 /**
@@ -17,37 +14,5 @@ export const welchT: MethodDefinition<TwoGroupDesign> = {
   id: 'welch-t',
   title: 'Welch’s t test',
   design: 'two-group',
-  compute({first, second}, options) {
-    const a = summarize(first.values);
-    const b = summarize(second.values);
-    const {se, df} = welchStandardError(a, b);
-    const difference = b.mean - a.mean;
-    const inference = tInference({
-      estimate: difference,
-      se,
-      df,
-      nullValue: 0,
-      alternative: options.alternative,
-      confidence: options.confidence,
-    });
-    return {
-      statistic: {name: 't', value: inference.t},
-      df,
-      p: inference.p,
-      estimate: {
-        name: `difference in means (${second.label} - ${first.label})`,
-        value: difference,
-        ci: inference.ci,
-        level: options.confidence,
-      },
-      effect: pooledHedgesG(a, b, options.alternative, options.confidence),
-      sensitivity: tSensitivity({
-        ncpPerUnit: 1 / se,
-        df,
-        alpha: options.alpha,
-        alternative: options.alternative,
-        smallestEffect: options.smallestEffect,
-      }),
-    };
-  },
+  compute: (design, options) => twoGroupTOutcome(design, options, welchStandardError),
 };

@@ -1,7 +1,9 @@
-import type {Alternative, EffectSize} from '../types.js';
+import type {Alternative, EffectSize, MethodOptions, MethodOutcome, TwoGroupDesign} from '../types.js';
 import {hedgesG} from './hedges-g.js';
 import {pooledSd} from './pooled-sd.js';
-import type {Summary} from './summarize.js';
+import {summarize, type Summary} from './summarize.js';
+import {tInference} from './t-inference.js';
+import {tSensitivity} from './t-sensitivity.js';
 
 /**
  * Pieces every two-group t test shares (Student's, Welch's, TOST), so the
@@ -33,4 +35,30 @@ export function pooledHedgesG(a: Summary, b: Summary, alternative: Alternative, 
     confidence,
     standardizer: 'pooled standard deviation',
   });
+}
+
+/**
+ * A two-group t test of m2 − m1 against 0, given the test's standard error
+ * and df (pooled for Student's, Welch's for Welch's): t, p, the difference
+ * with its interval, the pooled Hedges' g, and sensitivity on that se and df.
+ */
+export function twoGroupTOutcome(
+  {first, second}: TwoGroupDesign,
+  options: MethodOptions,
+  standardError: (a: Summary, b: Summary) => {readonly se: number; readonly df: number},
+): MethodOutcome {
+  const a = summarize(first.values);
+  const b = summarize(second.values);
+  const {se, df} = standardError(a, b);
+  const difference = b.mean - a.mean;
+  const {alternative, confidence} = options;
+  const inference = tInference({estimate: difference, se, df, nullValue: 0, alternative, confidence});
+  return {
+    statistic: {name: 't', value: inference.t},
+    df,
+    p: inference.p,
+    estimate: {name: `difference in means (${second.label} - ${first.label})`, value: difference, ci: inference.ci, level: confidence},
+    effect: pooledHedgesG(a, b, alternative, confidence),
+    sensitivity: tSensitivity({ncpPerUnit: 1 / se, df, alpha: options.alpha, alternative, smallestEffect: options.smallestEffect}),
+  };
 }
